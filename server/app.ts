@@ -1,0 +1,76 @@
+import express from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { existsSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { randomUUID } from 'node:crypto';
+import type { AppContext } from './context';
+import { verifyOrigin } from './http/csrf';
+import { loadUser } from './http/current-user';
+import { errorHandler, notFoundApi } from './http/error-handler';
+import { sessionMiddleware } from './http/session';
+import { authRoutes } from './routes/auth';
+import { healthRoutes } from './routes/health';
+import { workspaceRoutes } from './routes/workspaces';
+
+const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
+
+/** Builds the Express app; main.ts listens, tests hand it to supertest. */
+export function createApp(ctx: AppContext) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', ctx.config.trustProxy);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'default-src': ["'self'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'script-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'font-src': ["'self'"],
+          'object-src': ["'none'"],
+          'frame-ancestors': ["'none'"],
+          'upgrade-insecure-requests': ctx.config.cookieSecure ? [] : null,
+        },
+      },
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: ctx.logger,
+      genReqId: (req, res) => {
+        const id = (req.headers['x-request-id'] as string | undefined)?.slice(0, 64) ?? randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
+      serializers: { req: (req) => ({ id: req.id, method: req.method, url: req.url }) },
+    }),
+  );
+
+  const { middleware: session } = sessionMiddleware(ctx.config, ctx.pool, ctx.sessionSecret);
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb', strict: true }));
+  api.use(session);
+  api.use(verifyOrigin(ctx.config.publicOrigin));
+  api.use(loadUser(ctx.db));
+  api.use((_req, res, next) => {
+    res.set('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(healthRoutes(ctx));
+  api.use(authRoutes(ctx));
+  api.use(workspaceRoutes(ctx));
+  api.use(notFoundApi);
+  app.use('/api', api);
+
+  if (existsSync(clientDist)) {
+    app.use(express.static(clientDist, { index: false, maxAge: '1h' }));
+    // The client routes in the browser: every other GET gets the app's page.
+    app.get(/^(?!\/api\/).*/, (_req, res) => res.sendFile('index.html', { root: clientDist, maxAge: 0 }));
+  }
+  app.use(errorHandler(ctx.logger));
+  return app;
+}

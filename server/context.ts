@@ -1,0 +1,15 @@
+import type { Logger } from 'pino';
+import type { Pool } from 'mysql2/promise';
+import type { Config } from './config';
+import type { Database } from './db/client';
+import type { SignInLimiter } from './services/rate-limits';
+
+/** What every route needs, built once in main.ts (or by a test) and passed down. */
+export type AppContext = {
+  config: Config;
+  db: Database;
+  pool: Pool;
+  logger: Logger;
+  signInLimiter: SignInLimiter;
+  sessionSecret: string;
+};

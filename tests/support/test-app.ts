@@ -1,0 +1,32 @@
+// Builds a real Seedwake app against the test MariaDB that `npm test` started.
+import request from 'supertest';
+import { randomUUID } from 'node:crypto';
+import { createApp } from '../../server/app';
+import { loadConfig } from '../../server/config';
+import { createContext } from '../../server/context-factory';
+import type { RateLimitSettings } from '../../server/services/rate-limits';
+
+export const TEST_ORIGIN = 'http://seedwake.test';
+
+export function testApp(options: { signInLimits?: RateLimitSettings } = {}) {
+  const config = { ...loadConfig(), publicOrigin: TEST_ORIGIN, cookieSecure: false };
+  const ctx = createContext(config, options);
+  const app = createApp(ctx);
+  return { app, ctx, close: () => ctx.pool.end() };
+}
+
+/** A cookie-keeping client that sends our Origin, as a browser on a Seedwake page does. */
+export function browserLike(app: Parameters<typeof request.agent>[0]) {
+  return request.agent(app).set('Origin', TEST_ORIGIN);
+}
+
+export const uniqueEmail = (label = 'user') => `${label}-${randomUUID().slice(0, 8)}@test.example`;
+export const PASSWORD = 'correct horse battery';
+
+export async function signUp(app: Parameters<typeof request.agent>[0], label = 'user') {
+  const agent = browserLike(app);
+  const email = uniqueEmail(label);
+  const res = await agent.post('/api/auth/sign-up').send({ email, password: PASSWORD, name: `Test ${label}` });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return { agent, email, user: res.body.user as { id: string }, workspaceId: res.body.memberships[0].workspace.id as string };
+}
