@@ -45,7 +45,8 @@ export function createApp(ctx: AppContext) {
         res.setHeader('X-Request-Id', id);
         return id;
       },
-      customLogLevel: (_req, res, err) => (err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info'),
+      customLogLevel: (_req, res, err) =>
+        err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       serializers: { req: (req) => ({ id: req.id, method: req.method, url: req.url }) },
     }),
   );

@@ -35,7 +35,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   }
   const e = parsed.data;
   const production = e.NODE_ENV === 'production';
-  if (production && !e.SESSION_SECRET) throw new Error('SESSION_SECRET (16+ characters) is required in production');
+  if (production && !e.SESSION_SECRET)
+    throw new Error('SESSION_SECRET (16+ characters) is required in production');
   return {
     databaseUrl: e.DATABASE_URL,
     port: e.PORT,

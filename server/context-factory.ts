@@ -19,7 +19,10 @@ function resolveSessionSecret(config: Config) {
   return secret;
 }
 
-export function createContext(config: Config, options: { signInLimits?: RateLimitSettings } = {}): AppContext {
+export function createContext(
+  config: Config,
+  options: { signInLimits?: RateLimitSettings } = {},
+): AppContext {
   const { db, pool } = createDatabase(config.databaseUrl);
   return {
     config,

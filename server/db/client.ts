@@ -6,7 +6,13 @@ export type Database = ReturnType<typeof createDatabase>['db'];
 
 /** One pool per process; Drizzle wraps it. The pool is also handed to the session store. */
 export function createDatabase(url: string) {
-  const pool = mysql.createPool({ uri: url, connectionLimit: 10, dateStrings: false, timezone: 'Z', charset: 'utf8mb4' });
+  const pool = mysql.createPool({
+    uri: url,
+    connectionLimit: 10,
+    dateStrings: false,
+    timezone: 'Z',
+    charset: 'utf8mb4',
+  });
   const db = drizzle(pool, { schema, mode: 'default' });
   return { db, pool };
 }

@@ -16,14 +16,20 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return send(err.status, err.code, err.message, err.fields);
     }
     const bp = err as BodyParserError;
-    if (bp?.type === 'entity.parse.failed') return send(400, 'malformed_json', 'The request body is not valid JSON');
+    if (bp?.type === 'entity.parse.failed')
+      return send(400, 'malformed_json', 'The request body is not valid JSON');
     if (bp?.type === 'entity.too.large') {
-      return send(413, 'too_large', `The request body is larger than the ${Math.round((bp.limit ?? 0) / 1024)} kB allowed`);
+      return send(
+        413,
+        'too_large',
+        `The request body is larger than the ${Math.round((bp.limit ?? 0) / 1024)} kB allowed`,
+      );
     }
     if (bp?.type === 'encoding.unsupported' || bp?.type === 'charset.unsupported') {
       return send(415, 'invalid', 'Send the body as UTF-8 JSON');
     }
-    if (bp?.status && bp.status >= 400 && bp.status < 500) return send(bp.status, 'invalid', 'The request could not be read');
+    if (bp?.status && bp.status >= 400 && bp.status < 500)
+      return send(bp.status, 'invalid', 'The request could not be read');
     (req.log ?? logger).error({ err }, 'unhandled error');
     return send(500, 'internal', 'Something went wrong on our side; the error was logged');
   };

@@ -17,7 +17,12 @@ export const SESSION_COOKIE = 'seedwake.sid';
 export function sessionMiddleware(config: Config, pool: Pool, secret: string) {
   const MySQLStore = MySQLStoreFactory(session as never);
   const store = new MySQLStore(
-    { createDatabaseTable: false, clearExpired: true, checkExpirationInterval: 15 * 60_000, endConnectionOnClose: false },
+    {
+      createDatabaseTable: false,
+      clearExpired: true,
+      checkExpirationInterval: 15 * 60_000,
+      endConnectionOnClose: false,
+    },
     pool as never,
   );
   const middleware = session({

@@ -22,7 +22,9 @@ async function shutdown(code) {
   if (stopping) return;
   stopping = true;
   for (const child of children) if (child.exitCode === null) child.kill('SIGTERM');
-  await Promise.all(children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)));
+  await Promise.all(
+    children.map((c) => (c.exitCode === null ? new Promise((r) => c.once('exit', r)) : null)),
+  );
   if (mariadb) {
     process.stdout.write('Stopping MariaDB…\n');
     await stopServer(mariadb);
@@ -37,14 +39,24 @@ try {
   let databaseUrl = process.env.DATABASE_URL;
   if (!databaseUrl) {
     await step('MariaDB package', () => ensureMariadbInstalled());
-    const started = await step(`MariaDB on 127.0.0.1:${dbPort}`, () => startServer({ dir: dataDir, port: dbPort }));
+    const started = await step(`MariaDB on 127.0.0.1:${dbPort}`, () =>
+      startServer({ dir: dataDir, port: dbPort }),
+    );
     mariadb = started.child;
-    databaseUrl = ensureDatabase({ dir: dataDir, socket: started.socket, port: dbPort, database: 'seedwake' });
+    databaseUrl = ensureDatabase({
+      dir: dataDir,
+      socket: started.socket,
+      port: dbPort,
+      database: 'seedwake',
+    });
   }
   const env = { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), SEEDWAKE_DATA_DIR: dataDir };
   const tsx = join(root, 'node_modules', '.bin', 'tsx');
   await step('migrations and demo data', () => run(tsx, ['server/scripts/prepare.ts'], { cwd: root, env }));
-  if (!dev) await step('client build', () => run(join(root, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { cwd: root, env }));
+  if (!dev)
+    await step('client build', () =>
+      run(join(root, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { cwd: root, env }),
+    );
 
   const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
     cwd: root,

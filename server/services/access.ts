@@ -13,7 +13,9 @@ export async function requireRole(db: Database, userId: string, workspaceId: str
   const membership = await findMembership(db, workspaceId, userId);
   if (!membership) throw notFound('Workspace');
   if (rank[membership.role] < rank[needed]) {
-    throw forbidden(`This needs the ${needed} role; you are ${membership.role === 'editor' ? 'an' : 'a'} ${membership.role} here`);
+    throw forbidden(
+      `This needs the ${needed} role; you are ${membership.role === 'editor' ? 'an' : 'a'} ${membership.role} here`,
+    );
   }
   return membership;
 }

@@ -14,7 +14,10 @@ export async function sessionViewOf(db: Database, user: UserRow): Promise<Sessio
   const rows = await listMembershipsOfUser(db, user.id);
   return {
     user: { id: user.id, email: user.email, name: user.name },
-    memberships: rows.map((r) => ({ workspace: { id: r.id, name: r.name, personal: r.personal }, role: r.role })),
+    memberships: rows.map((r) => ({
+      workspace: { id: r.id, name: r.name, personal: r.personal },
+      role: r.role,
+    })),
   };
 }
 
@@ -24,11 +27,23 @@ export async function signUp(db: Database, body: SignUpBody, ip: string) {
     throw conflict('An account with this e-mail already exists; sign in instead');
   }
   const now = new Date();
-  const user = { id: randomUUID(), email: body.email, name: body.name, passwordHash: await hashPassword(body.password), createdAt: now, passwordChangedAt: now };
+  const user = {
+    id: randomUUID(),
+    email: body.email,
+    name: body.name,
+    passwordHash: await hashPassword(body.password),
+    createdAt: now,
+    passwordChangedAt: now,
+  };
   const workspaceId = randomUUID();
   await db.transaction(async (tx) => {
     await insertUser(tx, user);
-    await insertWorkspace(tx, { id: workspaceId, name: `${body.name}'s workspace`, personal: true, createdAt: now });
+    await insertWorkspace(tx, {
+      id: workspaceId,
+      name: `${body.name}'s workspace`,
+      personal: true,
+      createdAt: now,
+    });
     await insertMembership(tx, { workspaceId, userId: user.id, role: 'owner', createdAt: now });
   });
   await audit(db, 'sign_up', { userId: user.id, ip });
@@ -65,10 +80,15 @@ export async function currentUser(db: Database, userId: string | undefined, auth
 
 export async function changePassword(db: Database, user: UserRow, body: ChangePasswordBody, ip: string) {
   if (!(await verifyPassword(user.passwordHash, body.currentPassword))) {
-    throw invalid('The current password is not right', { currentPassword: 'The current password is not right' });
+    throw invalid('The current password is not right', {
+      currentPassword: 'The current password is not right',
+    });
   }
   const changedAt = new Date();
-  await updateUser(db, user.id, { passwordHash: await hashPassword(body.newPassword), passwordChangedAt: changedAt });
+  await updateUser(db, user.id, {
+    passwordHash: await hashPassword(body.newPassword),
+    passwordChangedAt: changedAt,
+  });
   await audit(db, 'password_changed', { userId: user.id, ip });
   return changedAt;
 }

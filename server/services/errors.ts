@@ -13,11 +13,15 @@ export class AppError extends Error {
   }
 }
 
-export const invalid = (message: string, fields?: Record<string, string>) => new AppError(400, 'invalid', message, fields);
-export const unauthenticated = (message = 'Sign in to continue') => new AppError(401, 'unauthenticated', message);
+export const invalid = (message: string, fields?: Record<string, string>) =>
+  new AppError(400, 'invalid', message, fields);
+export const unauthenticated = (message = 'Sign in to continue') =>
+  new AppError(401, 'unauthenticated', message);
 export const forbidden = (message = 'Your role in this workspace does not allow that') =>
   new AppError(403, 'forbidden', message);
 export const notFound = (what = 'That') => new AppError(404, 'not_found', `${what} was not found`);
 export const conflict = (message: string) => new AppError(409, 'conflict', message);
 export const rateLimited = (retryAfterSeconds: number, message = 'Too many attempts; try again later') =>
-  new AppError(429, 'rate_limited', message, undefined, { 'Retry-After': String(Math.max(1, Math.ceil(retryAfterSeconds))) });
+  new AppError(429, 'rate_limited', message, undefined, {
+    'Retry-After': String(Math.max(1, Math.ceil(retryAfterSeconds))),
+  });

@@ -3,7 +3,11 @@ import { rateLimited } from './errors';
 
 export type RateLimitSettings = { perAccount: number; perAddress: number; windowSeconds: number };
 
-export const defaultSignInLimits: RateLimitSettings = { perAccount: 5, perAddress: 30, windowSeconds: 15 * 60 };
+export const defaultSignInLimits: RateLimitSettings = {
+  perAccount: 5,
+  perAddress: 30,
+  windowSeconds: 15 * 60,
+};
 
 /**
  * Failed sign-ins are counted per account and per address (OWASP Authentication cheat
@@ -17,7 +21,10 @@ export function createSignInLimiter(settings: RateLimitSettings) {
     /** Throws 429 if either key is already exhausted; counts nothing. */
     async check(email: string, ip: string) {
       const [a, b] = await Promise.all([account.get(email), address.get(ip)]);
-      const blocked = [a, b].filter((r, i): r is RateLimiterRes => !!r && r.consumedPoints >= [settings.perAccount, settings.perAddress][i]);
+      const blocked = [a, b].filter(
+        (r, i): r is RateLimiterRes =>
+          !!r && r.consumedPoints >= [settings.perAccount, settings.perAddress][i],
+      );
       if (blocked.length) throw rateLimited(Math.max(...blocked.map((r) => r.msBeforeNext)) / 1000);
     },
     async fail(email: string, ip: string) {

@@ -31,7 +31,11 @@ export async function createWorkspace(db: Database, userId: string, name: string
   return { id, name, personal: false, role: 'owner' };
 }
 
-export async function getWorkspace(db: Database, userId: string, workspaceId: string): Promise<WorkspaceView> {
+export async function getWorkspace(
+  db: Database,
+  userId: string,
+  workspaceId: string,
+): Promise<WorkspaceView> {
   const m = await requireRole(db, userId, workspaceId, 'viewer');
   return { id: workspaceId, name: m.name, personal: m.personal, role: m.role };
 }
@@ -39,22 +43,37 @@ export async function getWorkspace(db: Database, userId: string, workspaceId: st
 export async function members(db: Database, userId: string, workspaceId: string): Promise<MemberView[]> {
   await requireRole(db, userId, workspaceId, 'viewer');
   const rows = await listMembers(db, workspaceId);
-  return rows.map((r) => ({ user: { id: r.id, email: r.email, name: r.name }, role: r.role, joinedAt: r.joinedAt.toISOString() }));
+  return rows.map((r) => ({
+    user: { id: r.id, email: r.email, name: r.name },
+    role: r.role,
+    joinedAt: r.joinedAt.toISOString(),
+  }));
 }
 
 async function memberView(db: Database, workspaceId: string, userId: string) {
   const all = await listMembers(db, workspaceId);
   const r = all.find((m) => m.id === userId);
   if (!r) throw notFound('Member');
-  return { user: { id: r.id, email: r.email, name: r.name }, role: r.role, joinedAt: r.joinedAt.toISOString() };
+  return {
+    user: { id: r.id, email: r.email, name: r.name },
+    role: r.role,
+    joinedAt: r.joinedAt.toISOString(),
+  };
 }
 
 /** Owners add an existing account; e-mail invitations for new people come separately. */
-export async function addMember(db: Database, actorId: string, workspaceId: string, body: AddMemberBody, ip: string) {
+export async function addMember(
+  db: Database,
+  actorId: string,
+  workspaceId: string,
+  body: AddMemberBody,
+  ip: string,
+) {
   await requireRole(db, actorId, workspaceId, 'owner');
   const user = await findUserByEmail(db, body.email);
   if (!user) throw notFound('An account with that e-mail');
-  if (await findMembership(db, workspaceId, user.id)) throw conflict('That person is already a member of this workspace');
+  if (await findMembership(db, workspaceId, user.id))
+    throw conflict('That person is already a member of this workspace');
   await insertMembership(db, { workspaceId, userId: user.id, role: body.role, createdAt: new Date() });
   await audit(db, 'member_added', { userId: actorId, workspaceId, ip }, { member: user.id, role: body.role });
   return memberView(db, workspaceId, user.id);
@@ -70,17 +89,35 @@ async function guardLastOwner(db: Database, workspaceId: string, userId: string,
   return target;
 }
 
-export async function changeRole(db: Database, actorId: string, workspaceId: string, userId: string, role: Role, ip: string) {
+export async function changeRole(
+  db: Database,
+  actorId: string,
+  workspaceId: string,
+  userId: string,
+  role: Role,
+  ip: string,
+) {
   await requireRole(db, actorId, workspaceId, 'owner');
   const target = await guardLastOwner(db, workspaceId, userId, role);
   if (target.role !== role) {
     await updateRole(db, workspaceId, userId, role);
-    await audit(db, 'role_changed', { userId: actorId, workspaceId, ip }, { member: userId, from: target.role, to: role });
+    await audit(
+      db,
+      'role_changed',
+      { userId: actorId, workspaceId, ip },
+      { member: userId, from: target.role, to: role },
+    );
   }
   return memberView(db, workspaceId, userId);
 }
 
-export async function removeMember(db: Database, actorId: string, workspaceId: string, userId: string, ip: string) {
+export async function removeMember(
+  db: Database,
+  actorId: string,
+  workspaceId: string,
+  userId: string,
+  ip: string,
+) {
   await requireRole(db, actorId, workspaceId, 'owner');
   await guardLastOwner(db, workspaceId, userId, null);
   await deleteMembership(db, workspaceId, userId);

@@ -8,8 +8,9 @@ import type { RateLimitSettings } from '../../server/services/rate-limits';
 
 export const TEST_ORIGIN = 'http://seedwake.test';
 
-export function testApp(options: { signInLimits?: RateLimitSettings } = {}) {
-  const config = { ...loadConfig(), publicOrigin: TEST_ORIGIN, cookieSecure: false };
+export function testApp(options: { signInLimits?: RateLimitSettings; publicOrigin?: string | null } = {}) {
+  const publicOrigin = options.publicOrigin === null ? undefined : (options.publicOrigin ?? TEST_ORIGIN);
+  const config = { ...loadConfig(), publicOrigin, cookieSecure: false };
   const ctx = createContext(config, options);
   const app = createApp(ctx);
   return { app, ctx, close: () => ctx.pool.end() };
@@ -26,7 +27,14 @@ export const PASSWORD = 'correct horse battery';
 export async function signUp(app: Parameters<typeof request.agent>[0], label = 'user') {
   const agent = browserLike(app);
   const email = uniqueEmail(label);
-  const res = await agent.post('/api/auth/sign-up').send({ email, password: PASSWORD, name: `Test ${label}` });
+  const res = await agent
+    .post('/api/auth/sign-up')
+    .send({ email, password: PASSWORD, name: `Test ${label}` });
   if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${JSON.stringify(res.body)}`);
-  return { agent, email, user: res.body.user as { id: string }, workspaceId: res.body.memberships[0].workspace.id as string };
+  return {
+    agent,
+    email,
+    user: res.body.user as { id: string },
+    workspaceId: res.body.memberships[0].workspace.id as string,
+  };
 }

@@ -18,6 +18,10 @@ export async function insertUser(db: Database, row: typeof users.$inferInsert) {
   await db.insert(users).values(row);
 }
 
-export async function updateUser(db: Database, id: string, patch: Partial<Pick<UserRow, 'name' | 'passwordHash' | 'passwordChangedAt'>>) {
+export async function updateUser(
+  db: Database,
+  id: string,
+  patch: Partial<Pick<UserRow, 'name' | 'passwordHash' | 'passwordChangedAt'>>,
+) {
   await db.update(users).set(patch).where(eq(users.id, id));
 }

@@ -13,7 +13,12 @@ export async function insertMembership(db: Database, row: typeof memberships.$in
 
 export function listMembershipsOfUser(db: Database, userId: string) {
   return db
-    .select({ id: workspaces.id, name: workspaces.name, personal: workspaces.personal, role: memberships.role })
+    .select({
+      id: workspaces.id,
+      name: workspaces.name,
+      personal: workspaces.personal,
+      role: memberships.role,
+    })
     .from(memberships)
     .innerJoin(workspaces, eq(workspaces.id, memberships.workspaceId))
     .where(eq(memberships.userId, userId))
@@ -32,7 +37,13 @@ export async function findMembership(db: Database, workspaceId: string, userId: 
 
 export function listMembers(db: Database, workspaceId: string) {
   return db
-    .select({ id: users.id, email: users.email, name: users.name, role: memberships.role, joinedAt: memberships.createdAt })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      role: memberships.role,
+      joinedAt: memberships.createdAt,
+    })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .where(eq(memberships.workspaceId, workspaceId))
@@ -40,11 +51,16 @@ export function listMembers(db: Database, workspaceId: string) {
 }
 
 export async function updateRole(db: Database, workspaceId: string, userId: string, role: Role) {
-  await db.update(memberships).set({ role }).where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+  await db
+    .update(memberships)
+    .set({ role })
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
 }
 
 export async function deleteMembership(db: Database, workspaceId: string, userId: string) {
-  await db.delete(memberships).where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
+  await db
+    .delete(memberships)
+    .where(and(eq(memberships.workspaceId, workspaceId), eq(memberships.userId, userId)));
 }
 
 export async function countOwners(db: Database, workspaceId: string) {

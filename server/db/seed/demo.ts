@@ -25,7 +25,9 @@ export async function seedDemo(db: Database) {
         createdAt: now,
         passwordChangedAt: now,
       });
-      await tx.insert(memberships).values({ workspaceId: demoWorkspace.id, userId: person.id, role: person.role, createdAt: now });
+      await tx
+        .insert(memberships)
+        .values({ workspaceId: demoWorkspace.id, userId: person.id, role: person.role, createdAt: now });
     });
     added++;
   }

@@ -18,9 +18,13 @@ export function initDataDir(dir) {
   if (existsSync(join(dataDir, 'mysql'))) return dataDir;
   mkdirSync(dataDir, { recursive: true });
   const userArgs = isRoot() ? ['--user=root'] : [];
-  run('mariadb-install-db', [...userArgs, `--datadir=${dataDir}`, '--skip-test-db', '--auth-root-authentication-method=socket'], {
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
+  run(
+    'mariadb-install-db',
+    [...userArgs, `--datadir=${dataDir}`, '--skip-test-db', '--auth-root-authentication-method=socket'],
+    {
+      stdio: ['ignore', 'ignore', 'inherit'],
+    },
+  );
   return dataDir;
 }
 

@@ -37,8 +37,12 @@ export function hasCommand(name) {
 export function ensureDebianPackage(command, pkg) {
   if (hasCommand(command)) return;
   if (!isRoot()) {
-    throw new Error(`${command} is missing. Install it with:\n  sudo apt-get update && sudo apt-get install -y ${pkg}`);
+    throw new Error(
+      `${command} is missing. Install it with:\n  sudo apt-get update && sudo apt-get install -y ${pkg}`,
+    );
   }
   run('apt-get', ['update', '-q']);
-  run('apt-get', ['install', '-y', '-q', pkg], { env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+  run('apt-get', ['install', '-y', '-q', pkg], {
+    env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
+  });
 }

@@ -1,0 +1,65 @@
+import { useState } from 'react';
+import { updateAccountBody } from '../../../../shared/api/auth';
+import { Button } from '../../shared/components/Button';
+import { FormAlert } from '../../shared/components/FormAlert';
+import { TextField } from '../../shared/components/TextField';
+import { serverFieldErrors, useForm, zodFieldErrors } from '../../shared/lib/forms';
+import { useCurrentUser } from '../../shared/lib/session';
+import { useUpdateAccount } from './api';
+
+export function NameForm() {
+  const user = useCurrentUser();
+  const update = useUpdateAccount();
+  const form = useForm({ name: user.name });
+  const [saved, setSaved] = useState(false);
+
+  const submit = () => {
+    if (update.isPending) return;
+    setSaved(false);
+    const parsed = updateAccountBody.safeParse(form.values);
+    if (!parsed.success) {
+      update.reset();
+      form.setErrors(zodFieldErrors(parsed.error));
+      return;
+    }
+    form.setErrors({});
+    update.mutate(parsed.data, {
+      onSuccess: (updated) => {
+        form.setValues({ name: updated.name });
+        setSaved(true);
+      },
+      onError: (error) => form.setErrors(serverFieldErrors(error)),
+    });
+  };
+
+  return (
+    <form
+      onSubmit={form.onSubmit(submit)}
+      noValidate
+      aria-labelledby="name-form-title"
+      className="flex flex-col gap-5"
+    >
+      <h2 id="name-form-title" className="text-xl font-semibold">
+        Your name
+      </h2>
+      <FormAlert error={update.error} />
+      <TextField
+        label="Name"
+        hint="Shown to the people in your workspaces and on reports."
+        autoComplete="name"
+        required
+        {...form.field('name')}
+      />
+      <div className="flex flex-wrap items-center gap-4">
+        <Button type="submit" pending={update.isPending} pendingLabel="Saving…">
+          Save name
+        </Button>
+        {saved ? (
+          <p role="status" className="text-sm font-medium">
+            <span aria-hidden="true">✓ </span>Name saved.
+          </p>
+        ) : null}
+      </div>
+    </form>
+  );
+}
