@@ -3,7 +3,8 @@
 // It validates with the same shared/ schemas and runs the same models/ functions as the
 // server. Invalid input: exit code 2, a message on stderr, nothing on stdout.
 import { readFileSync } from 'node:fs';
-import { parseScenario, issueText, hasChemicalStep, pesticideCautions } from '../../shared/scenario';
+import { parseScenario, issueText } from '../../shared/scenario/parse';
+import { hasChemicalStep, pesticideCautions } from '../../shared/scenario/cautions';
 import { matrixInputSchema } from '../../shared/matrix/schema';
 import { summaryToCsv } from '../../shared/projection/csv';
 import { formatPath } from '../../shared/scenario/parse';
@@ -56,7 +57,7 @@ function analyze(cmd: Extract<CliCommand, { command: 'analyze' }>): string {
   const parsed = matrixInputSchema.safeParse(readJson(cmd.file));
   if (!parsed.success) {
     throw new InputError(
-      `${cmd.file}: invalid matrix\n${parsed.error.issues.map((i) => `${formatPath(i.path)}: ${i.message}`).join('\n')}`,
+      `${cmd.file}: invalid matrix\n${parsed.error.issues.map((i) => `${formatPath(i.path, '(matrix file)')}: ${i.message}`).join('\n')}`,
     );
   }
   let analysis;

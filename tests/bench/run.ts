@@ -1,0 +1,10 @@
+// Runs every benchmark and prints each result as one JSON line (`npm run bench`).
+// To add a benchmark, append its function to BENCHES.
+import { benchSamplers } from './sampler';
+import { benchProjections } from './projection';
+
+const BENCHES: Array<() => Promise<object[]>> = [benchSamplers, benchProjections];
+
+for (const bench of BENCHES) {
+  for (const line of await bench()) console.log(JSON.stringify(line));
+}
