@@ -12,6 +12,8 @@ import { sessionMiddleware } from './http/session';
 import { authRoutes } from './routes/auth';
 import { healthRoutes } from './routes/health';
 import { workspaceRoutes } from './routes/workspaces';
+import { libraryRoutes } from './routes/library';
+import { projectionRoutes } from './routes/projections';
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -47,7 +49,10 @@ export function createApp(ctx: AppContext) {
       },
       customLogLevel: (_req, res, err) =>
         err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
-      serializers: { req: (req) => ({ id: req.id, method: req.method, url: req.url }) },
+      serializers: {
+        req: (req) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res) => ({ statusCode: res.statusCode }),
+      },
     }),
   );
 
@@ -64,6 +69,8 @@ export function createApp(ctx: AppContext) {
   api.use(healthRoutes(ctx));
   api.use(authRoutes(ctx));
   api.use(workspaceRoutes(ctx));
+  api.use(libraryRoutes(ctx));
+  api.use(projectionRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

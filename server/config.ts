@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { z } from 'zod';
 
 // Every setting comes from the environment; the README lists them with these defaults.
@@ -12,6 +13,8 @@ const envSchema = z.object({
   PUBLIC_ORIGIN: z.string().url().optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEEDWAKE_DATA_DIR: z.string().default('.data'),
+  PROJECTION_THREADS: z.coerce.number().int().min(1).max(64).optional(),
+  MAX_QUEUED_PROJECTIONS: z.coerce.number().int().min(1).max(10_000).default(64),
 });
 
 export type Config = {
@@ -25,6 +28,8 @@ export type Config = {
   publicOrigin: string | undefined;
   logLevel: string;
   dataDir: string;
+  projectionThreads: number;
+  maxQueuedProjections: number;
 };
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -48,5 +53,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     publicOrigin: e.PUBLIC_ORIGIN,
     logLevel: e.LOG_LEVEL,
     dataDir: e.SEEDWAKE_DATA_DIR,
+    // One thread is left for the request thread and MariaDB on small machines.
+    projectionThreads: e.PROJECTION_THREADS ?? Math.max(1, availableParallelism() - 1),
+    maxQueuedProjections: e.MAX_QUEUED_PROJECTIONS,
   };
 }

@@ -5,6 +5,8 @@ import { pino } from 'pino';
 import type { Config } from './config';
 import type { AppContext } from './context';
 import { createDatabase } from './db/client';
+import { createProjectionPool } from './projections/pool';
+import { createProjectionRunner } from './projections/runner';
 import { createSignInLimiter, defaultSignInLimits, type RateLimitSettings } from './services/rate-limits';
 
 /** A session secret that survives restarts: from the environment, or kept in the data folder. */
@@ -19,16 +21,27 @@ function resolveSessionSecret(config: Config) {
   return secret;
 }
 
-export function createContext(
-  config: Config,
-  options: { signInLimits?: RateLimitSettings } = {},
-): AppContext {
+export type ContextOptions = {
+  signInLimits?: RateLimitSettings;
+  projectionThreads?: number;
+  maxQueuedProjections?: number;
+};
+
+export function createContext(config: Config, options: ContextOptions = {}): AppContext {
   const { db, pool } = createDatabase(config.databaseUrl);
+  const logger = pino({ level: config.logLevel });
+  const projectionPool = createProjectionPool({
+    threads: options.projectionThreads ?? config.projectionThreads,
+  });
+  const runner = createProjectionRunner(db, projectionPool, logger, {
+    maxQueued: options.maxQueuedProjections ?? config.maxQueuedProjections,
+  });
   return {
     config,
     db,
     pool,
-    logger: pino({ level: config.logLevel }),
+    logger,
+    projections: { pool: projectionPool, runner },
     signInLimiter: createSignInLimiter(options.signInLimits ?? defaultSignInLimits),
     sessionSecret: resolveSessionSecret(config),
   };

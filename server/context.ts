@@ -3,6 +3,8 @@ import type { Pool } from 'mysql2/promise';
 import type { Config } from './config';
 import type { Database } from './db/client';
 import type { SignInLimiter } from './services/rate-limits';
+import type { ProjectionPool } from './projections/pool';
+import type { ProjectionRunner } from './projections/runner';
 
 /** What every route needs, built once in main.ts (or by a test) and passed down. */
 export type AppContext = {
@@ -12,4 +14,5 @@ export type AppContext = {
   logger: Logger;
   signInLimiter: SignInLimiter;
   sessionSecret: string;
+  projections: { pool: ProjectionPool; runner: ProjectionRunner };
 };

@@ -6,6 +6,8 @@ const config = loadConfig();
 const ctx = createContext(config);
 const app = createApp(ctx);
 
+await ctx.projections.runner.recover();
+
 const server = app.listen(config.port, config.host, () => {
   ctx.logger.info({ url: `http://${config.host}:${config.port}` }, 'Seedwake is serving');
   process.stdout.write(`\nSeedwake is ready at http://${config.host}:${config.port}\n`);
@@ -21,6 +23,7 @@ async function shutdown(signal: string) {
   const force = setTimeout(() => server.closeAllConnections(), 5_000);
   await new Promise((r) => server.once('close', r));
   clearTimeout(force);
+  await ctx.projections.runner.stop();
   await ctx.pool.end();
   process.exit(0);
 }

@@ -5,11 +5,17 @@ import { existsSync, readFileSync, mkdirSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureNodeModules } from '../../server/scripts/lib/deps.mjs';
-import { ensureDatabase, ensureMariadbInstalled, startServer, stopServer, wipe } from '../../server/scripts/lib/mariadb.mjs';
+import {
+  ensureDatabase,
+  ensureMariadbInstalled,
+  startServer,
+  stopServer,
+  wipe,
+} from '../../server/scripts/lib/mariadb.mjs';
 import { ensureDebianPackage, run, step } from '../../server/scripts/lib/steps.mjs';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '../..');
-const dir = join(root, '.test-data');
+const dir = resolve(root, process.env.SEEDWAKE_TEST_DIR ?? '.test-data');
 const outDir = join(root, 'test-output');
 const dbPort = Number(process.env.SEEDWAKE_TEST_DB_PORT ?? 5191);
 const bin = (name) => join(root, 'node_modules', '.bin', name);
@@ -27,7 +33,12 @@ try {
   mkdirSync(outDir, { recursive: true });
   const started = await step(`test MariaDB on 127.0.0.1:${dbPort}`, () => startServer({ dir, port: dbPort }));
   mariadb = started.child;
-  const databaseUrl = ensureDatabase({ dir, socket: started.socket, port: dbPort, database: 'seedwake_test' });
+  const databaseUrl = ensureDatabase({
+    dir,
+    socket: started.socket,
+    port: dbPort,
+    database: 'seedwake_test',
+  });
   const env = {
     ...process.env,
     DATABASE_URL: databaseUrl,
@@ -36,7 +47,9 @@ try {
     LOG_LEVEL: 'silent',
     NODE_ENV: 'test',
   };
-  await step('migrations and demo data', () => run(bin('tsx'), ['server/scripts/prepare.ts'], { cwd: root, env }));
+  await step('migrations and demo data', () =>
+    run(bin('tsx'), ['server/scripts/prepare.ts'], { cwd: root, env }),
+  );
   if (!only.length) {
     await step('typecheck', () => run(bin('tsc'), ['-p', 'tsconfig.json', '--noEmit'], { cwd: root }));
     await step('lint', () => run(bin('eslint'), ['-c', 'tests/lint/eslint.config.js', '.'], { cwd: root }));
@@ -45,7 +58,11 @@ try {
     await step('client build', () => run(bin('vite'), ['build', '--logLevel', 'warn'], { cwd: root, env }));
   const report = join(outDir, 'vitest.json');
   await step('vitest (unit, api, browser)', () =>
-    run(bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...only], { cwd: root, env }),
+    run(
+      bin('vitest'),
+      ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...only],
+      { cwd: root, env },
+    ),
   ).catch((err) => {
     code = 1;
     process.stderr.write(`${err.message}\n`);

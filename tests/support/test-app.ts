@@ -3,17 +3,23 @@ import request from 'supertest';
 import { randomUUID } from 'node:crypto';
 import { createApp } from '../../server/app';
 import { loadConfig } from '../../server/config';
-import { createContext } from '../../server/context-factory';
-import type { RateLimitSettings } from '../../server/services/rate-limits';
+import { createContext, type ContextOptions } from '../../server/context-factory';
 
 export const TEST_ORIGIN = 'http://seedwake.test';
 
-export function testApp(options: { signInLimits?: RateLimitSettings; publicOrigin?: string | null } = {}) {
+export function testApp(options: ContextOptions & { publicOrigin?: string | null } = {}) {
   const publicOrigin = options.publicOrigin === null ? undefined : (options.publicOrigin ?? TEST_ORIGIN);
   const config = { ...loadConfig(), publicOrigin, cookieSecure: false };
-  const ctx = createContext(config, options);
+  const ctx = createContext(config, { projectionThreads: 1, ...options });
   const app = createApp(ctx);
-  return { app, ctx, close: () => ctx.pool.end() };
+  return {
+    app,
+    ctx,
+    async close() {
+      await ctx.projections.runner.stop();
+      await ctx.pool.end();
+    },
+  };
 }
 
 /** A cookie-keeping client that sends our Origin, as a browser on a Seedwake page does. */

@@ -1,0 +1,90 @@
+// The projection worker pool: a scenario's replicates are cut into blocks that run in
+// worker threads (never on the request thread), then merged and summarised exactly as
+// the CLI's runProjection does, so any pool size gives the same numbers.
+import { MessageChannel } from 'node:worker_threads';
+import { Piscina } from 'piscina';
+import { mergeReplicateBlocks, seriesNames, type ReplicateBlock } from '../../models/projection/trajectories';
+import type { Scenario } from '../../models/scenario/types';
+import type { ProjectionOutcome } from './outcome';
+import type { BlockTask, FinishTask } from './worker';
+
+export class CancelledError extends Error {
+  constructor() {
+    super('cancelled');
+  }
+}
+
+export type ProjectionPool = ReturnType<typeof createProjectionPool>;
+
+export function createProjectionPool(options: { threads: number }) {
+  const pool = new Piscina({
+    filename: new URL('./worker.ts', import.meta.url).href,
+    minThreads: 1,
+    maxThreads: options.threads,
+    // Workers load TypeScript through tsx, whether or not the parent process did.
+    execArgv: ['--import', 'tsx'],
+    idleTimeout: 60_000,
+  });
+
+  function runBlock(
+    scenario: Scenario,
+    from: number,
+    to: number,
+    cancel: Int32Array,
+    onDone: (n: number) => void,
+  ) {
+    const channel = new MessageChannel();
+    channel.port1.on('message', onDone);
+    const task: BlockTask = { kind: 'block', scenario, from, to, progress: channel.port2, cancel };
+    return (pool.run(task, { transferList: [channel.port2] }) as Promise<ReplicateBlock>).finally(() =>
+      channel.port1.close(),
+    );
+  }
+
+  type Hooks = { onProgress?(done: number): void; signal?: AbortSignal };
+
+  /**
+   * Runs every replicate of a scenario and merges the blocks. `onProgress` gets the
+   * replicates done so far; aborting `signal` stops the blocks between replicates and
+   * rejects with CancelledError.
+   */
+  async function replicates(scenario: Scenario, hooks: Hooks = {}): Promise<ReplicateBlock> {
+    const R = scenario.replicates;
+    // Enough blocks to keep every thread busy and the progress bar moving, none tiny.
+    const blockCount = Math.max(1, Math.min(options.threads * 4, Math.ceil(R / 25)));
+    const size = Math.ceil(R / blockCount);
+    const cancel = new Int32Array(new SharedArrayBuffer(4));
+    const onAbort = () => Atomics.store(cancel, 0, 1);
+    hooks.signal?.addEventListener('abort', onAbort, { once: true });
+    let done = 0;
+    try {
+      const tasks: Promise<ReplicateBlock>[] = [];
+      for (let from = 0; from < R; from += size) {
+        tasks.push(
+          runBlock(scenario, from, Math.min(R, from + size), cancel, (n: number) =>
+            hooks.onProgress?.((done += n)),
+          ),
+        );
+      }
+      const blocks = await Promise.all(tasks).catch((err) => {
+        Atomics.store(cancel, 0, 1);
+        throw hooks.signal?.aborted ? new CancelledError() : err;
+      });
+      if (hooks.signal?.aborted) throw new CancelledError();
+      return mergeReplicateBlocks(blocks);
+    } finally {
+      hooks.signal?.removeEventListener('abort', onAbort);
+    }
+  }
+
+  /** A whole projection: the replicates, then summary, mean field and matrix view in a worker. */
+  async function run(scenario: Scenario, hooks: Hooks = {}): Promise<ProjectionOutcome> {
+    const block = await replicates(scenario, hooks);
+    const finish: FinishTask = { kind: 'finish', scenario, block };
+    return (await pool.run(finish, {
+      transferList: seriesNames.map((n) => block.series[n].buffer) as never,
+    })) as ProjectionOutcome;
+  }
+
+  return { run, replicates, threads: options.threads, destroy: () => pool.destroy() };
+}
