@@ -14,6 +14,8 @@ import { healthRoutes } from './routes/health';
 import { workspaceRoutes } from './routes/workspaces';
 import { libraryRoutes } from './routes/library';
 import { projectionRoutes } from './routes/projections';
+import { tokenRoutes } from './routes/tokens';
+import { bearerAuth } from './http/bearer';
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -61,6 +63,7 @@ export function createApp(ctx: AppContext) {
   api.use(express.json({ limit: '1mb', strict: true }));
   api.use(session);
   api.use(verifyOrigin(ctx.config.publicOrigin));
+  api.use(bearerAuth(ctx.db));
   api.use(loadUser(ctx.db));
   api.use((_req, res, next) => {
     res.set('Cache-Control', 'no-store');
@@ -71,6 +74,7 @@ export function createApp(ctx: AppContext) {
   api.use(workspaceRoutes(ctx));
   api.use(libraryRoutes(ctx));
   api.use(projectionRoutes(ctx));
+  api.use(tokenRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -56,15 +56,28 @@ export function createProjectionPool(options: { threads: number }) {
     const cancel = new Int32Array(new SharedArrayBuffer(4));
     const onAbort = () => Atomics.store(cancel, 0, 1);
     hooks.signal?.addEventListener('abort', onAbort, { once: true });
-    let done = 0;
+    // Per-block counts: a block's last progress message may arrive after its result, so a
+    // finished block counts in full and the reported total only ever rises.
+    const blockDone: number[] = [];
+    let reported = 0;
+    const report = () => {
+      const total = blockDone.reduce((a, b) => a + b, 0);
+      if (total > reported) hooks.onProgress?.((reported = total));
+    };
     try {
       const tasks: Promise<ReplicateBlock>[] = [];
-      for (let from = 0; from < R; from += size) {
-        tasks.push(
-          runBlock(scenario, from, Math.min(R, from + size), cancel, (n: number) =>
-            hooks.onProgress?.((done += n)),
-          ),
-        );
+      for (let from = 0, i = 0; from < R; from += size, i++) {
+        const to = Math.min(R, from + size);
+        blockDone[i] = 0;
+        const task = runBlock(scenario, from, to, cancel, (n: number) => {
+          blockDone[i] = Math.min(to - from, blockDone[i] + n);
+          report();
+        }).then((block) => {
+          blockDone[i] = to - from;
+          report();
+          return block;
+        });
+        tasks.push(task);
       }
       const blocks = await Promise.all(tasks).catch((err) => {
         Atomics.store(cancel, 0, 1);

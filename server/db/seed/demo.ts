@@ -50,18 +50,16 @@ export async function seedDemo(db: Database) {
       await ensure(
         () => db.select({ id: speciesProfiles.id }).from(speciesProfiles).where(eq(speciesProfiles.id, p.id)),
         () =>
-          db
-            .insert(speciesProfiles)
-            .values({
-              id: p.id,
-              workspaceId: null,
-              name: p.profile.name,
-              builtIn: true,
-              profile: p.profile,
-              sources: p.sources,
-              createdAt: now,
-              updatedAt: now,
-            }),
+          db.insert(speciesProfiles).values({
+            id: p.id,
+            workspaceId: null,
+            name: p.profile.name,
+            builtIn: true,
+            profile: p.profile,
+            sources: p.sources,
+            createdAt: now,
+            updatedAt: now,
+          }),
       ),
     );
   }
@@ -70,15 +68,13 @@ export async function seedDemo(db: Database) {
       await ensure(
         () => db.select({ id: fields.id }).from(fields).where(eq(fields.id, f.id)),
         () =>
-          db
-            .insert(fields)
-            .values({
-              ...f,
-              workspaceId: demoWorkspace.id,
-              name: f.setting.name,
-              createdAt: now,
-              updatedAt: now,
-            }),
+          db.insert(fields).values({
+            ...f,
+            workspaceId: demoWorkspace.id,
+            name: f.setting.name,
+            createdAt: now,
+            updatedAt: now,
+          }),
       ),
     );
   }

@@ -28,8 +28,12 @@ describe('sign-up, sign-in, sign-out', () => {
 
   it('gives the same answer for an unknown account and a wrong password', async () => {
     const { email } = await signUp(t.app, 'gamma');
-    const wrong = await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: 'not the password' });
-    const unknown = await browserLike(t.app).post('/api/auth/sign-in').send({ email: uniqueEmail('nobody'), password: 'not the password' });
+    const wrong = await browserLike(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email, password: 'not the password' });
+    const unknown = await browserLike(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email: uniqueEmail('nobody'), password: 'not the password' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);
@@ -38,7 +42,13 @@ describe('sign-up, sign-in, sign-out', () => {
   it('rate-limits failed sign-ins per account with Retry-After, even for the right password', async () => {
     const { email } = await signUp(t.app, 'delta');
     for (let i = 0; i < 3; i++) {
-      expect((await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: 'guess ' + i })).status).toBe(401);
+      expect(
+        (
+          await browserLike(t.app)
+            .post('/api/auth/sign-in')
+            .send({ email, password: 'guess ' + i })
+        ).status,
+      ).toBe(401);
     }
     const blocked = await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: PASSWORD });
     expect(blocked.status).toBe(429);
@@ -48,7 +58,9 @@ describe('sign-up, sign-in, sign-out', () => {
 
   it('rejects a duplicate sign-up with 409', async () => {
     const { email } = await signUp(t.app, 'eps');
-    const again = await browserLike(t.app).post('/api/auth/sign-up').send({ email, password: PASSWORD, name: 'Again' });
+    const again = await browserLike(t.app)
+      .post('/api/auth/sign-up')
+      .send({ email, password: PASSWORD, name: 'Again' });
     expect(again.status).toBe(409);
   });
 
@@ -56,16 +68,22 @@ describe('sign-up, sign-in, sign-out', () => {
     const { agent, email } = await signUp(t.app, 'zeta');
     const other = browserLike(t.app);
     expect((await other.post('/api/auth/sign-in').send({ email, password: PASSWORD })).status).toBe(200);
-    const bad = await agent.post('/api/account/password').send({ currentPassword: 'wrong one', newPassword: 'a brand new passphrase' });
+    const bad = await agent
+      .post('/api/account/password')
+      .send({ currentPassword: 'wrong one', newPassword: 'a brand new passphrase' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.currentPassword).toBeDefined();
     // Session timestamps are in ms; make sure the change is strictly later than the other sign-in.
     await new Promise((r) => setTimeout(r, 5));
-    const ok = await agent.post('/api/account/password').send({ currentPassword: PASSWORD, newPassword: 'a brand new passphrase' });
+    const ok = await agent
+      .post('/api/account/password')
+      .send({ currentPassword: PASSWORD, newPassword: 'a brand new passphrase' });
     expect(ok.status).toBe(204);
     expect((await agent.get('/api/auth/me')).status).toBe(200);
     expect((await other.get('/api/auth/me')).status).toBe(401);
-    expect((await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: PASSWORD })).status).toBe(401);
+    expect(
+      (await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: PASSWORD })).status,
+    ).toBe(401);
   });
 
   it('stores an argon2id hash, never the password (OWASP Password Storage Cheat Sheet parameters)', async () => {
@@ -80,8 +98,14 @@ describe('sign-up, sign-in, sign-out', () => {
     const { email, user } = await signUp(t.app, 'theta');
     await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: 'nope nope nope' });
     await browserLike(t.app).post('/api/auth/sign-in').send({ email, password: PASSWORD });
-    const [rows] = await t.ctx.pool.query('SELECT event FROM audit_log WHERE user_id = ? ORDER BY id', [user.id]);
-    expect((rows as { event: string }[]).map((r) => r.event)).toEqual(['sign_up', 'sign_in_failed', 'sign_in']);
+    const [rows] = await t.ctx.pool.query('SELECT event FROM audit_log WHERE user_id = ? ORDER BY id', [
+      user.id,
+    ]);
+    expect((rows as { event: string }[]).map((r) => r.event)).toEqual([
+      'sign_up',
+      'sign_in_failed',
+      'sign_in',
+    ]);
   });
 });
 
@@ -109,7 +133,10 @@ describe('sessions live in MariaDB', () => {
 describe('CSRF: verified Origin', () => {
   it('refuses a state-changing request from another origin, accepts our own', async () => {
     const body = { email: uniqueEmail('csrf'), password: PASSWORD, name: 'Csrf' };
-    const foreign = await request(t.app).post('/api/auth/sign-up').set('Origin', 'http://evil.example').send(body);
+    const foreign = await request(t.app)
+      .post('/api/auth/sign-up')
+      .set('Origin', 'http://evil.example')
+      .send(body);
     expect(foreign.status).toBe(403);
     expect(foreign.body.error.code).toBe('csrf');
     const none = await request(t.app).post('/api/auth/sign-up').send(body);

@@ -7,7 +7,10 @@ afterAll(() => t.close());
 
 describe('API conventions', () => {
   it('answers malformed JSON with 400 malformed_json, never 500', async () => {
-    const res = await browserLike(t.app).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email": ');
+    const res = await browserLike(t.app)
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send('{"email": ');
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('malformed_json');
   });
@@ -22,7 +25,9 @@ describe('API conventions', () => {
   });
 
   it('names unknown fields and invalid values', async () => {
-    const res = await browserLike(t.app).post('/api/auth/sign-up').send({ email: 'not-an-email', password: 'short', name: 'X', admin: true });
+    const res = await browserLike(t.app)
+      .post('/api/auth/sign-up')
+      .send({ email: 'not-an-email', password: 'short', name: 'X', admin: true });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid');
     expect(res.body.error.fields).toMatchObject({
@@ -53,14 +58,29 @@ describe('API conventions', () => {
 describe('random bodies never produce a 500 (fast-check)', () => {
   const anyBody = fc.oneof(
     fc.anything(),
-    fc.record({ email: fc.oneof(fc.string(), fc.emailAddress(), fc.integer()), password: fc.oneof(fc.string(), fc.constant(null)), name: fc.string() }, { requiredKeys: [] }),
+    fc.record(
+      {
+        email: fc.oneof(fc.string(), fc.emailAddress(), fc.integer()),
+        password: fc.oneof(fc.string(), fc.constant(null)),
+        name: fc.string(),
+      },
+      { requiredKeys: [] },
+    ),
   );
-  for (const path of ['/api/auth/sign-up', '/api/auth/sign-in', '/api/auth/sign-out', '/api/account/password']) {
+  for (const path of [
+    '/api/auth/sign-up',
+    '/api/auth/sign-in',
+    '/api/auth/sign-out',
+    '/api/account/password',
+  ]) {
     it(`POST ${path}`, async () => {
       const { agent } = await signUp(t.app, 'fuzz');
       await fc.assert(
         fc.asyncProperty(anyBody, async (body) => {
-          const res = await agent.post(path).set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null');
+          const res = await agent
+            .post(path)
+            .set('Content-Type', 'application/json')
+            .send(JSON.stringify(body) ?? 'null');
           expect(res.status).toBeLessThan(500);
         }),
         { numRuns: 40, seed: 20261201 },
@@ -71,7 +91,10 @@ describe('random bodies never produce a 500 (fast-check)', () => {
     const { agent } = await signUp(t.app, 'fuzz2');
     await fc.assert(
       fc.asyncProperty(anyBody, async (body) => {
-        const res = await agent.patch('/api/account').set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null');
+        const res = await agent
+          .patch('/api/account')
+          .set('Content-Type', 'application/json')
+          .send(JSON.stringify(body) ?? 'null');
         expect(res.status).toBeLessThan(500);
       }),
       { numRuns: 40, seed: 20261202 },

@@ -8,20 +8,30 @@ describe('workspaces and roles', () => {
   it('an owner adds an existing user, changes the role, and removes them', async () => {
     const owner = await signUp(t.app, 'owner');
     const other = await signUp(t.app, 'member');
-    const add = await owner.agent.post(`/api/workspaces/${owner.workspaceId}/members`).send({ email: other.email, role: 'viewer' });
+    const add = await owner.agent
+      .post(`/api/workspaces/${owner.workspaceId}/members`)
+      .send({ email: other.email, role: 'viewer' });
     expect(add.status).toBe(201);
     expect(add.body.role).toBe('viewer');
-    const dup = await owner.agent.post(`/api/workspaces/${owner.workspaceId}/members`).send({ email: other.email, role: 'viewer' });
+    const dup = await owner.agent
+      .post(`/api/workspaces/${owner.workspaceId}/members`)
+      .send({ email: other.email, role: 'viewer' });
     expect(dup.status).toBe(409);
-    const change = await owner.agent.patch(`/api/workspaces/${owner.workspaceId}/members/${other.user.id}`).send({ role: 'editor' });
+    const change = await owner.agent
+      .patch(`/api/workspaces/${owner.workspaceId}/members/${other.user.id}`)
+      .send({ role: 'editor' });
     expect(change.status).toBe(200);
     expect(change.body.role).toBe('editor');
     const list = await other.agent.get(`/api/workspaces/${owner.workspaceId}/members`);
     expect(list.status).toBe(200);
     expect(list.body).toHaveLength(2);
-    const [audit] = await t.ctx.pool.query('SELECT event FROM audit_log WHERE workspace_id = ? ORDER BY id', [owner.workspaceId]);
+    const [audit] = await t.ctx.pool.query('SELECT event FROM audit_log WHERE workspace_id = ? ORDER BY id', [
+      owner.workspaceId,
+    ]);
     expect((audit as { event: string }[]).map((r) => r.event)).toEqual(['member_added', 'role_changed']);
-    expect((await owner.agent.delete(`/api/workspaces/${owner.workspaceId}/members/${other.user.id}`)).status).toBe(204);
+    expect(
+      (await owner.agent.delete(`/api/workspaces/${owner.workspaceId}/members/${other.user.id}`)).status,
+    ).toBe(204);
     expect((await other.agent.get(`/api/workspaces/${owner.workspaceId}/members`)).status).toBe(404);
   });
 
@@ -29,19 +39,27 @@ describe('workspaces and roles', () => {
     const owner = await signUp(t.app, 'owner2');
     const viewer = await signUp(t.app, 'viewer');
     const third = await signUp(t.app, 'third');
-    await owner.agent.post(`/api/workspaces/${owner.workspaceId}/members`).send({ email: viewer.email, role: 'viewer' });
+    await owner.agent
+      .post(`/api/workspaces/${owner.workspaceId}/members`)
+      .send({ email: viewer.email, role: 'viewer' });
     expect((await viewer.agent.get(`/api/workspaces/${owner.workspaceId}/members`)).status).toBe(200);
-    const add = await viewer.agent.post(`/api/workspaces/${owner.workspaceId}/members`).send({ email: third.email, role: 'owner' });
+    const add = await viewer.agent
+      .post(`/api/workspaces/${owner.workspaceId}/members`)
+      .send({ email: third.email, role: 'owner' });
     expect(add.status).toBe(403);
     expect(add.body.error.code).toBe('forbidden');
-    const promote = await viewer.agent.patch(`/api/workspaces/${owner.workspaceId}/members/${viewer.user.id}`).send({ role: 'owner' });
+    const promote = await viewer.agent
+      .patch(`/api/workspaces/${owner.workspaceId}/members/${viewer.user.id}`)
+      .send({ role: 'owner' });
     expect(promote.status).toBe(403);
   });
 
   it('an editor cannot change members either', async () => {
     const owner = await signUp(t.app, 'owner3');
     const editor = await signUp(t.app, 'editor');
-    await owner.agent.post(`/api/workspaces/${owner.workspaceId}/members`).send({ email: editor.email, role: 'editor' });
+    await owner.agent
+      .post(`/api/workspaces/${owner.workspaceId}/members`)
+      .send({ email: editor.email, role: 'editor' });
     const res = await editor.agent.delete(`/api/workspaces/${owner.workspaceId}/members/${owner.user.id}`);
     expect(res.status).toBe(403);
   });
@@ -51,13 +69,17 @@ describe('workspaces and roles', () => {
     const b = await signUp(t.app, 'wsB');
     expect((await a.agent.get(`/api/workspaces/${b.workspaceId}`)).status).toBe(404);
     expect((await a.agent.get(`/api/workspaces/${b.workspaceId}/members`)).status).toBe(404);
-    const add = await a.agent.post(`/api/workspaces/${b.workspaceId}/members`).send({ email: a.email, role: 'owner' });
+    const add = await a.agent
+      .post(`/api/workspaces/${b.workspaceId}/members`)
+      .send({ email: a.email, role: 'owner' });
     expect(add.status).toBe(404);
   });
 
   it('never leaves a workspace without an owner', async () => {
     const owner = await signUp(t.app, 'lone');
-    const demote = await owner.agent.patch(`/api/workspaces/${owner.workspaceId}/members/${owner.user.id}`).send({ role: 'viewer' });
+    const demote = await owner.agent
+      .patch(`/api/workspaces/${owner.workspaceId}/members/${owner.user.id}`)
+      .send({ role: 'viewer' });
     expect(demote.status).toBe(409);
     const remove = await owner.agent.delete(`/api/workspaces/${owner.workspaceId}/members/${owner.user.id}`);
     expect(remove.status).toBe(409);
