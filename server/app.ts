@@ -15,6 +15,7 @@ import { workspaceRoutes } from './routes/workspaces';
 import { libraryRoutes } from './routes/library';
 import { projectionRoutes } from './routes/projections';
 import { tokenRoutes } from './routes/tokens';
+import { referenceRoutes } from './routes/reference';
 import { bearerAuth } from './http/bearer';
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
@@ -70,6 +71,7 @@ export function createApp(ctx: AppContext) {
     next();
   });
   api.use(healthRoutes(ctx));
+  api.use(referenceRoutes());
   api.use(authRoutes(ctx));
   api.use(workspaceRoutes(ctx));
   api.use(libraryRoutes(ctx));
