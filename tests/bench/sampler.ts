@@ -54,7 +54,8 @@ function benchBinomialMix(): { bestSeconds: number; drawsPerSecond: number; mean
   };
 }
 
-type NumpyResult = { available: true; drawsPerSecond: number; version: string } | { available: false; reason: string };
+type NumpyResult =
+  { available: true; drawsPerSecond: number; version: string } | { available: false; reason: string };
 
 async function benchNumpy(): Promise<NumpyResult> {
   // The machine-tuning variables of the shell must not reach numpy's BLAS here.
@@ -63,8 +64,12 @@ async function benchNumpy(): Promise<NumpyResult> {
   delete env.OPENBLAS_L2_SIZE;
   try {
     const { stdout } = await run('python3', [NUMPY_SCRIPT], { env, timeout: 300_000 });
-    const line = JSON.parse(stdout.trim().split('\n').pop() ?? '{}') as { drawsPerSecond?: number; numpy?: string };
-    if (typeof line.drawsPerSecond !== 'number') return { available: false, reason: 'no drawsPerSecond in output' };
+    const line = JSON.parse(stdout.trim().split('\n').pop() ?? '{}') as {
+      drawsPerSecond?: number;
+      numpy?: string;
+    };
+    if (typeof line.drawsPerSecond !== 'number')
+      return { available: false, reason: 'no drawsPerSecond in output' };
     return { available: true, drawsPerSecond: line.drawsPerSecond, version: String(line.numpy) };
   } catch (error) {
     // python3 missing, numpy missing or the script failing all mean "no reference".

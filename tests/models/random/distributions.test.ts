@@ -237,7 +237,8 @@ describe('triangular', () => {
     const xs = drawMany(N, () => s.triangular(a, c, b));
     expect(xs.every((x) => x >= a && x <= b)).toBe(true);
     expectMoments(xs, (a + b + c) / 3, (a * a + b * b + c * c - a * b - a * c - b * c) / 18);
-    const cdf = (x: number) => (x <= c ? (x - a) ** 2 / ((b - a) * (c - a)) : 1 - (b - x) ** 2 / ((b - a) * (b - c)));
+    const cdf = (x: number) =>
+      x <= c ? (x - a) ** 2 / ((b - a) * (c - a)) : 1 - (b - x) ** 2 / ((b - a) * (b - c));
     const cuts = Array.from({ length: 19 }, (_, i) => a + ((b - a) * (i + 1)) / 20);
     expect(chiSquareContinuous(xs, cdf, cuts).pValue).toBeGreaterThan(0.001);
   });

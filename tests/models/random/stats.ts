@@ -54,7 +54,11 @@ export function chiSquareDiscrete(
 }
 
 /** Chi-square test of continuous draws against a CDF over the given cut points. */
-export function chiSquareContinuous(draws: ArrayLike<number>, cdf: (x: number) => number, cuts: number[]): ChiSquareResult {
+export function chiSquareContinuous(
+  draws: ArrayLike<number>,
+  cdf: (x: number) => number,
+  cuts: number[],
+): ChiSquareResult {
   const total = draws.length;
   const observed = new Array<number>(cuts.length + 1).fill(0);
   for (let i = 0; i < total; i++) {
