@@ -79,10 +79,13 @@ export function createProjectionPool(options: { threads: number }) {
         });
         tasks.push(task);
       }
-      const blocks = await Promise.all(tasks).catch((err) => {
-        Atomics.store(cancel, 0, 1);
-        throw hooks.signal?.aborted ? new CancelledError() : err;
-      });
+      // On any failure every block is told to stop and awaited, so no task outlives the run.
+      const settled = await Promise.allSettled(
+        tasks.map((task) => task.catch((err) => (Atomics.store(cancel, 0, 1), Promise.reject(err)))),
+      );
+      const failed = settled.find((r): r is PromiseRejectedResult => r.status === 'rejected');
+      if (failed) throw hooks.signal?.aborted ? new CancelledError() : failed.reason;
+      const blocks = settled.map((r) => (r as PromiseFulfilledResult<ReplicateBlock>).value);
       if (hooks.signal?.aborted) throw new CancelledError();
       return mergeReplicateBlocks(blocks);
     } finally {
