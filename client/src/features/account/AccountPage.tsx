@@ -1,6 +1,7 @@
 import { PageTitle, Panel } from '../../shared/components/Panel';
 import { useCurrentUser } from '../../shared/lib/session';
 import { NameForm } from './NameForm';
+import { NotificationSettingsForm } from './NotificationSettingsForm';
 import { PasswordForm } from './PasswordForm';
 
 export function AccountPage() {
@@ -23,6 +24,9 @@ export function AccountPage() {
         </Panel>
         <Panel>
           <PasswordForm />
+        </Panel>
+        <Panel>
+          <NotificationSettingsForm />
         </Panel>
       </div>
     </div>

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { updateAccountBody } from '../../../../shared/api/auth';
-import { Button } from '../../shared/components/Button';
 import { FormAlert } from '../../shared/components/FormAlert';
+import { SubmitRow } from '../../shared/components/SubmitRow';
 import { TextField } from '../../shared/components/TextField';
 import { serverFieldErrors, useForm, zodFieldErrors } from '../../shared/lib/forms';
 import { useCurrentUser } from '../../shared/lib/session';
@@ -50,16 +50,12 @@ export function NameForm() {
         required
         {...form.field('name')}
       />
-      <div className="flex flex-wrap items-center gap-4">
-        <Button type="submit" pending={update.isPending} pendingLabel="Saving…">
-          Save name
-        </Button>
-        {saved ? (
-          <p role="status" className="text-sm font-medium">
-            <span aria-hidden="true">✓ </span>Name saved.
-          </p>
-        ) : null}
-      </div>
+      <SubmitRow
+        label="Save name"
+        pending={update.isPending}
+        pendingLabel="Saving…"
+        done={saved ? 'Name saved.' : null}
+      />
     </form>
   );
 }

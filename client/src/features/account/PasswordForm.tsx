@@ -1,9 +1,11 @@
 import { useState } from 'react';
 import { changePasswordBody } from '../../../../shared/api/auth';
-import { Button } from '../../shared/components/Button';
 import { FormAlert } from '../../shared/components/FormAlert';
+import { NewPasswordFields } from '../../shared/components/NewPasswordFields';
+import { SubmitRow } from '../../shared/components/SubmitRow';
 import { TextField } from '../../shared/components/TextField';
-import { serverFieldErrors, useForm, zodFieldErrors, type FieldErrors } from '../../shared/lib/forms';
+import { serverFieldErrors, useForm } from '../../shared/lib/forms';
+import { checkNewPassword } from '../../shared/lib/newPassword';
 import { useChangePassword } from './api';
 
 const empty = { currentPassword: '', newPassword: '', repeatPassword: '' };
@@ -16,18 +18,14 @@ export function PasswordForm() {
   const submit = () => {
     if (change.isPending) return;
     setChanged(false);
-    const { repeatPassword, ...body } = form.values;
-    const parsed = changePasswordBody.safeParse(body);
-    const errors: FieldErrors = parsed.success ? {} : zodFieldErrors(parsed.error);
-    // Checked here only: a typo in a password nobody can see would lock the person out.
-    if (repeatPassword !== body.newPassword) errors.repeatPassword = 'The two new passwords are not the same';
-    if (!parsed.success || Object.keys(errors).length > 0) {
+    const checked = checkNewPassword(changePasswordBody, form.values);
+    if (!checked.ok) {
       change.reset();
-      form.setErrors(errors);
+      form.setErrors(checked.errors);
       return;
     }
     form.setErrors({});
-    change.mutate(parsed.data, {
+    change.mutate(checked.body, {
       onSuccess: () => {
         form.setValues(empty);
         setChanged(true);
@@ -54,31 +52,16 @@ export function PasswordForm() {
         required
         {...form.field('currentPassword')}
       />
-      <TextField
-        label="New password"
-        type="password"
-        hint="At least 12 characters. A few unrelated words make a strong one."
-        autoComplete="new-password"
-        required
-        {...form.field('newPassword')}
+      <NewPasswordFields
+        newPassword={form.field('newPassword')}
+        repeatPassword={form.field('repeatPassword')}
       />
-      <TextField
-        label="New password again"
-        type="password"
-        autoComplete="new-password"
-        required
-        {...form.field('repeatPassword')}
+      <SubmitRow
+        label="Change password"
+        pending={change.isPending}
+        pendingLabel="Changing…"
+        done={changed ? 'Password changed.' : null}
       />
-      <div className="flex flex-wrap items-center gap-4">
-        <Button type="submit" pending={change.isPending} pendingLabel="Changing…">
-          Change password
-        </Button>
-        {changed ? (
-          <p role="status" className="text-sm font-medium">
-            <span aria-hidden="true">✓ </span>Password changed.
-          </p>
-        ) : null}
-      </div>
     </form>
   );
 }
