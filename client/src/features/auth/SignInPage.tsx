@@ -1,4 +1,4 @@
-import { Link, Navigate, useSearchParams } from 'react-router-dom';
+import { Link, Navigate, useLocation, useSearchParams } from 'react-router-dom';
 import { signInBody } from '../../../../shared/api/auth';
 import { Button } from '../../shared/components/Button';
 import { FormAlert } from '../../shared/components/FormAlert';
@@ -6,6 +6,7 @@ import { TextField } from '../../shared/components/TextField';
 import { serverFieldErrors, useForm, zodFieldErrors } from '../../shared/lib/forms';
 import { useMe, useSignIn } from './api';
 import { AuthFrame } from './AuthFrame';
+import { prefilledEmail, type EmailState } from './prefill';
 import { safeReturnPath } from './returnTo';
 
 export function SignInPage() {
@@ -13,7 +14,8 @@ export function SignInPage() {
   const next = safeReturnPath(params.get('next'));
   const me = useMe();
   const signIn = useSignIn();
-  const form = useForm({ email: '', password: '' });
+  const justReset = params.get('reset') === 'done';
+  const form = useForm({ email: prefilledEmail(useLocation().state), password: '' });
 
   // Signed in already, or just now: go where the person was heading.
   if (me.data) return <Navigate to={next} replace />;
@@ -36,7 +38,18 @@ export function SignInPage() {
     <AuthFrame>
       <title>Sign in · Seedwake</title>
       <h1 className="text-4xl font-semibold">Sign in</h1>
-      <p className="mt-2 text-loam-700">Welcome back. Your fields and projections are where you left them.</p>
+      {justReset ? (
+        <p
+          role="status"
+          className="mt-3 rounded-seed border-l-4 border-sprout-600 bg-sprout-100 px-4 py-3 text-humus-900"
+        >
+          Your password was changed and every session was signed out. Sign in with the new password.
+        </p>
+      ) : (
+        <p className="mt-2 text-loam-700">
+          Welcome back. Your fields and projections are where you left them.
+        </p>
+      )}
       <form onSubmit={form.onSubmit(submit)} noValidate className="mt-8 flex flex-col gap-5">
         <FormAlert error={signIn.error} />
         <TextField
@@ -54,6 +67,13 @@ export function SignInPage() {
           required
           {...form.field('password')}
         />
+        <Link
+          to="/forgot-password"
+          state={{ email: form.values.email } satisfies EmailState}
+          className="-mt-2 self-start text-sm font-medium text-russet-700 underline underline-offset-4 hover:text-russet-800"
+        >
+          Forgot your password?
+        </Link>
         <Button type="submit" pending={signIn.isPending} pendingLabel="Signing in…" className="mt-1 w-full">
           Sign in
         </Button>

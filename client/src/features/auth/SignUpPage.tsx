@@ -1,4 +1,4 @@
-import { Link, Navigate, useSearchParams } from 'react-router-dom';
+import { Link, Navigate, useLocation, useSearchParams } from 'react-router-dom';
 import { signUpBody, type SessionView } from '../../../../shared/api/auth';
 import { Button } from '../../shared/components/Button';
 import { FormAlert } from '../../shared/components/FormAlert';
@@ -6,6 +6,7 @@ import { TextField } from '../../shared/components/TextField';
 import { serverFieldErrors, useForm, zodFieldErrors } from '../../shared/lib/forms';
 import { useMe, useSignUp } from './api';
 import { AuthFrame } from './AuthFrame';
+import { prefilledEmail } from './prefill';
 import { safeReturnPath } from './returnTo';
 
 /** Someone who signed up from an invitation lands in the workspace that invited them. */
@@ -20,7 +21,8 @@ export function SignUpPage() {
   const next = safeReturnPath(params.get('next'));
   const me = useMe();
   const signUp = useSignUp();
-  const form = useForm({ name: '', email: '', password: '' });
+  // An invitation's page passes the invited address along, so the person need not retype it.
+  const form = useForm({ name: '', email: prefilledEmail(useLocation().state), password: '' });
 
   if (me.data) return <Navigate to={landingPath(me.data, invitationToken !== undefined, next)} replace />;
 
@@ -87,7 +89,14 @@ export function SignUpPage() {
       <p className="mt-8 border-t border-silt-300 pt-6 text-loam-700">
         Already have an account?{' '}
         <Link
-          to={params.get('next') ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'}
+          to={
+            // Someone invited who has an account after all goes back to the invitation after signing in.
+            invitationToken
+              ? `/sign-in?next=${encodeURIComponent(`/invitations/${invitationToken}`)}`
+              : params.get('next')
+                ? `/sign-in?next=${encodeURIComponent(next)}`
+                : '/sign-in'
+          }
           className="font-medium text-russet-700 underline underline-offset-4 hover:text-russet-800"
         >
           Sign in

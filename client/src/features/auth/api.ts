@@ -1,11 +1,18 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
 import type { SessionView, SignInBody, SignUpBody } from '../../../../shared/api/auth';
+import type {
+  PasswordResetBody,
+  PasswordResetLookup,
+  PasswordResetRequestBody,
+  PasswordResetRequested,
+} from '../../../../shared/api/password-reset';
 import { ApiRequestError, apiFetch } from '../../shared/lib/apiFetch';
 
 export const authKeys = {
   all: ['auth'] as const,
   me: () => [...authKeys.all, 'me'] as const,
+  passwordReset: (token: string) => [...authKeys.all, 'password-reset', token] as const,
 };
 
 /**
@@ -67,6 +74,35 @@ export function useSignOut() {
     mutationFn: () => apiFetch<void>('/api/auth/sign-out', { method: 'POST' }),
     onSuccess: async () => {
       await navigate('/sign-in', { replace: true });
+      queryClient.clear();
+      queryClient.setQueryData(authKeys.me(), null);
+    },
+  });
+}
+
+export function useRequestPasswordReset() {
+  return useMutation({
+    mutationFn: (body: PasswordResetRequestBody) =>
+      apiFetch<PasswordResetRequested>('/api/auth/password-reset', { method: 'POST', body }),
+  });
+}
+
+const resetPath = (token: string) => `/api/auth/password-reset/${encodeURIComponent(token)}`;
+
+/** Whether a reset link still works; an unknown link is a 404. */
+export function usePasswordResetLookup(token: string) {
+  return useQuery({
+    queryKey: authKeys.passwordReset(token),
+    queryFn: ({ signal }) => apiFetch<PasswordResetLookup>(resetPath(token), { signal }),
+  });
+}
+
+/** A new password ends every session, this browser's too, so nothing cached outlives it. */
+export function useResetPassword(token: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: PasswordResetBody) => apiFetch<void>(resetPath(token), { method: 'POST', body }),
+    onSuccess: () => {
       queryClient.clear();
       queryClient.setQueryData(authKeys.me(), null);
     },

@@ -6,6 +6,8 @@ import { roleNames, roleSummaries } from '../../shared/lib/roles';
 import { useCurrentUser } from '../../shared/lib/session';
 import { useMembers } from './api';
 import { AddMemberForm } from './AddMemberForm';
+import { InvitationsList } from './InvitationsList';
+import { InviteForm } from './InviteForm';
 import { MemberRow } from './MemberRow';
 
 /** Who is in the workspace and what each may do. Only owners see the controls; the server enforces the same. */
@@ -23,7 +25,7 @@ export function MembersPage() {
         title="Members"
         lead={
           canManage
-            ? 'Add people who already have a Seedwake account, and set what each of them may do here.'
+            ? 'Invite people by e-mail or add those who already have a Seedwake account, and set what each of them may do here.'
             : `Only owners change who is here and what they may do. You are ${workspace.role === 'editor' ? 'an editor' : 'a viewer'} in this workspace.`
         }
       />
@@ -38,9 +40,14 @@ export function MembersPage() {
       </dl>
 
       {canManage ? (
-        <Panel>
-          <AddMemberForm workspaceId={workspace.id} />
-        </Panel>
+        <>
+          <Panel>
+            <InviteForm workspaceId={workspace.id} />
+          </Panel>
+          <Panel>
+            <AddMemberForm workspaceId={workspace.id} />
+          </Panel>
+        </>
       ) : null}
 
       <section aria-labelledby="member-list-title">
@@ -95,6 +102,8 @@ export function MembersPage() {
           </div>
         ) : null}
       </section>
+
+      {canManage ? <InvitationsList workspaceId={workspace.id} /> : null}
     </div>
   );
 }

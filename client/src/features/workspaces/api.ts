@@ -6,12 +6,14 @@ import type {
   MemberView,
   WorkspaceView,
 } from '../../../../shared/api/workspaces';
+import type { CreateInvitationBody, InvitationView } from '../../../../shared/api/invitations';
 import { apiFetch } from '../../shared/lib/apiFetch';
 
 export const workspaceKeys = {
   all: ['workspaces'] as const,
   list: () => [...workspaceKeys.all, 'list'] as const,
   members: (workspaceId: string) => [...workspaceKeys.all, workspaceId, 'members'] as const,
+  invitations: (workspaceId: string) => [...workspaceKeys.all, workspaceId, 'invitations'] as const,
 };
 
 const membersPath = (workspaceId: string) => `/api/workspaces/${encodeURIComponent(workspaceId)}/members`;
@@ -77,5 +79,47 @@ export function useRemoveMember(workspaceId: string) {
     mutationFn: (userId: string) =>
       apiFetch<void>(`${membersPath(workspaceId)}/${encodeURIComponent(userId)}`, { method: 'DELETE' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.all }),
+  });
+}
+
+const invitationsPath = (workspaceId: string) =>
+  `/api/workspaces/${encodeURIComponent(workspaceId)}/invitations`;
+
+/** Open invitations of the workspace (owners only; the server answers 403 to anyone else). */
+export function useInvitations(workspaceId: string) {
+  return useQuery({
+    queryKey: workspaceKeys.invitations(workspaceId),
+    queryFn: ({ signal }) => apiFetch<InvitationView[]>(invitationsPath(workspaceId), { signal }),
+  });
+}
+
+export function useInvite(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateInvitationBody) =>
+      apiFetch<InvitationView>(invitationsPath(workspaceId), { method: 'POST', body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.invitations(workspaceId) }),
+  });
+}
+
+export function useResendInvitation(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (invitationId: string) =>
+      apiFetch<InvitationView>(`${invitationsPath(workspaceId)}/${encodeURIComponent(invitationId)}/resend`, {
+        method: 'POST',
+      }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.invitations(workspaceId) }),
+  });
+}
+
+export function useRevokeInvitation(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (invitationId: string) =>
+      apiFetch<void>(`${invitationsPath(workspaceId)}/${encodeURIComponent(invitationId)}`, {
+        method: 'DELETE',
+      }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.invitations(workspaceId) }),
   });
 }
