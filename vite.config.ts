@@ -20,7 +20,12 @@ export default defineConfig({
         test: {
           name: 'unit',
           root: '.',
-          include: ['tests/models/**/*.test.ts', 'tests/shared/**/*.test.ts', 'tests/server/unit/**/*.test.ts', 'tests/client/**/*.test.ts'],
+          include: [
+            'tests/models/**/*.test.ts',
+            'tests/shared/**/*.test.ts',
+            'tests/server/unit/**/*.test.ts',
+            'tests/client/**/*.test.ts',
+          ],
           environment: 'node',
           testTimeout: 60_000,
         },

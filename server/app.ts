@@ -14,9 +14,22 @@ import { healthRoutes } from './routes/health';
 import { workspaceRoutes } from './routes/workspaces';
 import { libraryRoutes } from './routes/library';
 import { projectionRoutes } from './routes/projections';
+import { sweepRoutes } from './routes/sweeps';
 import { tokenRoutes } from './routes/tokens';
+import { shareRoutes } from './routes/shares';
 import { referenceRoutes } from './routes/reference';
 import { bearerAuth } from './http/bearer';
+import { lessonRoutes } from './routes/lessons';
+import { speciesCardRoutes } from './routes/species-cards';
+import { invitationRoutes } from './routes/invitations';
+import { passwordResetRoutes } from './routes/password-reset';
+import { notificationRoutes } from './routes/notifications';
+import { devRoutes } from './routes/dev';
+import { usesFakeSmtp } from './mail/start';
+import { recordRoutes } from './routes/records';
+
+const redactLinkTokens = (url: string) =>
+  url.replace(/\/(invitations|password-reset|class)\/[^/?#]+/g, '/$1/[redacted]');
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -53,7 +66,8 @@ export function createApp(ctx: AppContext) {
       customLogLevel: (_req, res, err) =>
         err || res.statusCode >= 500 ? 'error' : res.statusCode >= 400 ? 'warn' : 'info',
       serializers: {
-        req: (req) => ({ id: req.id, method: req.method, url: req.url }),
+        // Link secrets (invitations, password resets, class links) never reach the logs.
+        req: (req) => ({ id: req.id, method: req.method, url: redactLinkTokens(req.url) }),
         res: (res) => ({ statusCode: res.statusCode }),
       },
     }),
@@ -76,7 +90,16 @@ export function createApp(ctx: AppContext) {
   api.use(workspaceRoutes(ctx));
   api.use(libraryRoutes(ctx));
   api.use(projectionRoutes(ctx));
+  api.use(sweepRoutes(ctx));
   api.use(tokenRoutes(ctx));
+  api.use(shareRoutes(ctx));
+  api.use(lessonRoutes(ctx));
+  api.use(speciesCardRoutes(ctx));
+  api.use(invitationRoutes(ctx));
+  api.use(passwordResetRoutes(ctx));
+  api.use(notificationRoutes(ctx));
+  api.use(recordRoutes(ctx));
+  if (usesFakeSmtp(ctx.config)) api.use(devRoutes(ctx));
   api.use(notFoundApi);
   app.use('/api', api);
 

@@ -7,7 +7,19 @@ import type { AppContext } from './context';
 import { createDatabase } from './db/client';
 import { createProjectionPool } from './projections/pool';
 import { createProjectionRunner } from './projections/runner';
-import { createSignInLimiter, defaultSignInLimits, type RateLimitSettings } from './services/rate-limits';
+import { createSweepWorker } from './sweeps/worker-loop';
+import { createReplayLimiter, defaultReplayLimits, type ReplayLimitSettings } from './services/replay-limits';
+import { LONG_PROJECTIONS } from '../shared/api/notifications';
+import { linkOrigin } from './http/origin';
+import { projectionNotifier, type LongWork } from './services/notifications';
+import {
+  createLinkLimiters,
+  createSignInLimiter,
+  defaultLinkLimits,
+  defaultSignInLimits,
+  type LinkLimitSettings,
+  type RateLimitSettings,
+} from './services/rate-limits';
 
 /** A session secret that survives restarts: from the environment, or kept in the data folder. */
 function resolveSessionSecret(config: Config) {
@@ -25,6 +37,11 @@ export type ContextOptions = {
   signInLimits?: RateLimitSettings;
   projectionThreads?: number;
   maxQueuedProjections?: number;
+  sweeps?: Partial<Config['sweeps']>;
+  replayLimits?: ReplayLimitSettings;
+  linkLimits?: LinkLimitSettings;
+  /** When a launch of projections counts as long enough for a notice (shared/api/notifications.ts). */
+  longProjections?: LongWork;
 };
 
 export function createContext(config: Config, options: ContextOptions = {}): AppContext {
@@ -35,14 +52,22 @@ export function createContext(config: Config, options: ContextOptions = {}): App
   });
   const runner = createProjectionRunner(db, projectionPool, logger, {
     maxQueued: options.maxQueuedProjections ?? config.maxQueuedProjections,
+    onFinished: projectionNotifier(db, logger, {
+      origin: linkOrigin(config),
+      long: options.longProjections ?? LONG_PROJECTIONS,
+    }),
   });
+  const sweepSettings = { ...config.sweeps, ...options.sweeps };
   return {
     config,
     db,
     pool,
     logger,
     projections: { pool: projectionPool, runner },
+    sweeps: { settings: sweepSettings, worker: createSweepWorker(db, logger, sweepSettings) },
     signInLimiter: createSignInLimiter(options.signInLimits ?? defaultSignInLimits),
+    replayLimiter: createReplayLimiter(options.replayLimits ?? defaultReplayLimits),
+    linkLimiters: createLinkLimiters(options.linkLimits ?? defaultLinkLimits),
     sessionSecret: resolveSessionSecret(config),
   };
 }

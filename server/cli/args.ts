@@ -10,13 +10,15 @@ export type CliCommand =
       years?: number;
       format: 'json' | 'csv';
     }
-  | { command: 'analyze'; file: string };
+  | { command: 'analyze'; file: string }
+  | { command: 'sweep'; file: string; workers: number; format: 'json' | 'csv' };
 
 export type ArgsResult = { ok: true; value: CliCommand } | { ok: false; message: string };
 
 export const usage = [
   'usage: sim project <scenario.json> [--seed N] [--replicates N] [--years N] [--format json|csv]',
   '       sim analyze <matrix.json>',
+  '       sim sweep <sweep.json> [--workers N] [--format csv|json]',
 ].join('\n');
 
 const fail = (message: string): ArgsResult => ({ ok: false, message: `${message}\n${usage}` });
@@ -25,9 +27,9 @@ const INTEGER = /^-?\d+$/;
 
 export function parseArgs(argv: readonly string[]): ArgsResult {
   const [command, ...rest] = argv;
-  if (command === undefined) return fail('missing command (project or analyze)');
-  if (command !== 'project' && command !== 'analyze')
-    return fail(`unknown command "${command}" (project or analyze)`);
+  if (command === undefined) return fail('missing command (project, analyze or sweep)');
+  if (command !== 'project' && command !== 'analyze' && command !== 'sweep')
+    return fail(`unknown command "${command}" (project, analyze or sweep)`);
   const positional: string[] = [];
   const flags = new Map<string, string>();
   for (let i = 0; i < rest.length; i++) {
@@ -52,6 +54,22 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     const first = flags.keys().next();
     if (!first.done) return fail(`analyze takes no options, got --${first.value}`);
     return { ok: true, value: { command, file } };
+  }
+  if (command === 'sweep') {
+    const sweep: CliCommand = { command, file, workers: 1, format: 'json' };
+    for (const [name, value] of flags) {
+      if (name === 'format') {
+        if (value !== 'json' && value !== 'csv') return fail(`--format must be json or csv, got "${value}"`);
+        sweep.format = value;
+      } else if (name === 'workers') {
+        if (!INTEGER.test(value) || Number(value) < 1 || Number(value) > 64)
+          return fail(`--workers must be a whole number from 1 to 64, got "${value}"`);
+        sweep.workers = Number(value);
+      } else {
+        return fail(`unknown option --${name}`);
+      }
+    }
+    return { ok: true, value: sweep };
   }
   const out: CliCommand = { command, file, format: 'json' };
   for (const [name, value] of flags) {

@@ -1,5 +1,6 @@
 // Seedwake's command line for analysts and scripts: `project` runs a scenario and prints
-// its summary (JSON or CSV), `analyze` prints the asymptotic analysis of a matrix.
+// its summary (JSON or CSV), `analyze` prints the asymptotic analysis of a matrix, `sweep`
+// runs a sensitivity sweep in worker threads and prints its points (JSON or tidy CSV).
 // It validates with the same shared/ schemas and runs the same models/ functions as the
 // server. Invalid input: exit code 2, a message on stderr, nothing on stdout.
 import { readFileSync } from 'node:fs';
@@ -10,6 +11,8 @@ import { summaryToCsv } from '../../shared/projection/csv';
 import { formatPath } from '../../shared/scenario/parse';
 import { runProjection } from '../../models/projection/run';
 import { analyzeMatrix } from '../../models/matrix/analysis';
+import { sweepCsv } from '../../shared/sweeps/csv';
+import { runLocalSweep, sweepFileSchema } from '../sweeps/local-run';
 import { parseArgs } from './args';
 import type { CliCommand } from './args';
 
@@ -73,14 +76,45 @@ function analyze(cmd: Extract<CliCommand, { command: 'analyze' }>): string {
   return `${JSON.stringify({ lambda, stableStage, reproductiveValue, sensitivities, elasticities, dampingRatio }, null, 2)}\n`;
 }
 
-function main(argv: readonly string[]): number {
+async function sweep(cmd: Extract<CliCommand, { command: 'sweep' }>): Promise<string> {
+  const file = sweepFileSchema.safeParse(readJson(cmd.file));
+  if (!file.success) {
+    throw new InputError(
+      `${cmd.file}: invalid sweep\n${file.error.issues.map((i) => `${formatPath(i.path, '(sweep file)')}: ${i.message}`).join('\n')}`,
+    );
+  }
+  const parsed = parseScenario(file.data.scenario);
+  if (!parsed.ok) {
+    throw new InputError(
+      `${cmd.file}: invalid scenario\n${parsed.issues.map((i) => `scenario.${i.path}: ${i.message}`).join('\n')}`,
+    );
+  }
+  const run = await runLocalSweep(parsed.scenario, file.data, cmd.workers);
+  if (!run.ok) {
+    throw new InputError(
+      `${cmd.file}: invalid sweep\n${Object.entries(run.problems)
+        .map(([k, v]) => `${k}: ${v}`)
+        .join('\n')}`,
+    );
+  }
+  const { plan, points } = run.result;
+  const d = file.data;
+  if (cmd.format === 'csv') return sweepCsv({ ...d, parameters: plan.parameters }, points);
+  const cautions = hasChemicalStep(parsed.scenario.strategy) ? pesticideCautions : [];
+  const { name, design, outcomes, outcomeYear, replicatesPerPoint, seed } = d;
+  return `${JSON.stringify({ cautions, name: name ?? null, parameters: plan.parameters, design, outcomes, outcomeYear, replicatesPerPoint, seed, horizonYears: parsed.scenario.horizonYears, totalPoints: plan.points, points }, null, 2)}\n`;
+}
+
+async function main(argv: readonly string[]): Promise<number> {
   const args = parseArgs(argv);
   if (!args.ok) {
     process.stderr.write(`${args.message}\n`);
     return 2;
   }
   try {
-    const out = args.value.command === 'project' ? project(args.value) : analyze(args.value);
+    const cmd = args.value;
+    const out =
+      cmd.command === 'project' ? project(cmd) : cmd.command === 'analyze' ? analyze(cmd) : await sweep(cmd);
     process.stdout.write(out);
     return 0;
   } catch (error) {
@@ -90,4 +124,4 @@ function main(argv: readonly string[]): number {
   }
 }
 
-process.exitCode = main(process.argv.slice(2));
+process.exitCode = await main(process.argv.slice(2));

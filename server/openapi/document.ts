@@ -44,9 +44,15 @@ export function openApiDocument(version: string) {
     const content =
       op.produces === 'text/csv'
         ? { 'text/csv': { schema: { type: 'string' } } }
-        : op.response
-          ? { 'application/json': { schema: schemaOf(op.response, 'output') } }
-          : undefined;
+        : op.produces === 'application/pdf'
+          ? { 'application/pdf': { schema: { type: 'string', format: 'binary' } } }
+          : op.produces === 'image'
+            ? Object.fromEntries(
+                ['image/jpeg', 'image/png'].map((t) => [t, { schema: { type: 'string', format: 'binary' } }]),
+              )
+            : op.response
+              ? { 'application/json': { schema: schemaOf(op.response, 'output') } }
+              : undefined;
     (paths[openApiPath(`/api${op.path}`)] ??= {})[op.method] = {
       tags: [op.tag],
       summary: op.summary,
@@ -57,6 +63,25 @@ export function openApiDocument(version: string) {
             ? 'Needs a signed-in session.'
             : 'Open.',
       parameters: parameters(op),
+      ...(op.upload
+        ? {
+            requestBody: {
+              required: true,
+              content: {
+                'multipart/form-data': {
+                  schema: {
+                    type: 'object',
+                    required: [op.upload.file, ...op.upload.fields],
+                    properties: {
+                      [op.upload.file]: { type: 'string', format: 'binary' },
+                      ...Object.fromEntries(op.upload.fields.map((f) => [f, { type: 'string' }])),
+                    },
+                  },
+                },
+              },
+            },
+          }
+        : {}),
       ...(op.body
         ? {
             requestBody: {

@@ -9,7 +9,16 @@ import * as fields from '../../shared/api/fields';
 import * as strategies from '../../shared/api/strategies';
 import * as scenarios from '../../shared/api/scenarios';
 import * as projections from '../../shared/api/projections';
+import * as sweeps from '../../shared/api/sweeps';
 import * as tokens from '../../shared/api/tokens';
+import * as shares from '../../shared/api/shares';
+import * as lessons from '../../shared/api/lessons';
+import * as cards from '../../shared/api/species-cards';
+import * as invitations from '../../shared/api/invitations';
+import * as reset from '../../shared/api/password-reset';
+import * as notices from '../../shared/api/notifications';
+import * as mail from '../../shared/api/mail';
+import * as records from '../../shared/api/records';
 
 export type Operation = {
   method: 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -24,7 +33,9 @@ export type Operation = {
   body?: z.ZodType;
   response?: z.ZodType;
   status?: number;
-  produces?: 'application/json' | 'text/csv';
+  produces?: 'application/json' | 'text/csv' | 'image' | 'application/pdf';
+  /** A multipart/form-data upload: the file's part name and the text fields beside it. */
+  upload?: { file: string; fields: string[] };
 };
 
 const list = <T extends z.ZodType>(s: T) => z.array(s);
@@ -165,6 +176,98 @@ export const operations: Operation[] = [
     status: 204,
   },
   {
+    method: 'post',
+    path: '/auth/password-reset',
+    tag: 'Account',
+    summary:
+      'Ask for a password reset link by e-mail (the same 202 answer whether or not an account uses the address; rate-limited per address and per e-mail)',
+    access: 'public',
+    body: reset.passwordResetRequestBody,
+    response: reset.passwordResetRequested,
+    status: 202,
+  },
+  {
+    method: 'get',
+    path: '/auth/password-reset/:token',
+    tag: 'Account',
+    summary: 'Whether a reset link still works (valid, expired or used; 404 if unknown)',
+    access: 'public',
+    params: reset.passwordResetParams,
+    response: reset.passwordResetLookup,
+  },
+  {
+    method: 'post',
+    path: '/auth/password-reset/:token',
+    tag: 'Account',
+    summary:
+      'Set a new password with a reset link (single use; ends every session of the account; 410 if expired or used)',
+    access: 'public',
+    params: reset.passwordResetParams,
+    body: reset.passwordResetBody,
+    status: 204,
+  },
+  {
+    method: 'get',
+    path: '/account/notifications',
+    tag: 'Notices',
+    summary: 'Your notice settings (e-mail on or off)',
+    access: 'session',
+    response: notices.notificationSettings,
+  },
+  {
+    method: 'patch',
+    path: '/account/notifications',
+    tag: 'Notices',
+    summary: 'Turn the e-mail about long projections on or off',
+    access: 'session',
+    body: notices.notificationSettingsBody,
+    response: notices.notificationSettings,
+  },
+  {
+    method: 'get',
+    path: '/notifications',
+    tag: 'Notices',
+    summary: 'Your latest notices and how many are unread',
+    access: 'session',
+    response: notices.notificationList,
+  },
+  {
+    method: 'post',
+    path: '/notifications/:notificationId/read',
+    tag: 'Notices',
+    summary: 'Mark a notice read',
+    access: 'session',
+    params: notices.notificationParams,
+    status: 204,
+  },
+  {
+    method: 'get',
+    path: '/invitations/:token',
+    tag: 'Invitations',
+    summary: 'What an invitation link offers, and whether it still works (404 if unknown; rate-limited)',
+    access: 'public',
+    params: invitations.invitationTokenParams,
+    response: invitations.invitationLookup,
+  },
+  {
+    method: 'post',
+    path: '/invitations/:token/accept',
+    tag: 'Invitations',
+    summary:
+      'Join the workspace with an invitation sent to your address (single use; 410 if expired, used or revoked)',
+    access: 'session',
+    params: invitations.invitationTokenParams,
+    response: invitations.acceptedInvitation,
+  },
+  {
+    method: 'get',
+    path: '/dev/outbox',
+    tag: 'Development',
+    summary: 'Messages the local fake SMTP server received (development only: absent in production)',
+    access: 'public',
+    response: list(mail.outboxMessage),
+  },
+  {
     method: 'get',
     path: '/account/tokens',
     tag: 'API tokens',
@@ -255,6 +358,44 @@ export const operations: Operation[] = [
     summary: 'Remove a member',
     access: owner,
     params: ws.memberParams,
+    status: 204,
+  },
+  {
+    method: 'get',
+    path: `${W}/invitations`,
+    tag: 'Invitations',
+    summary: 'Open invitations (pending or expired, not yet accepted or revoked)',
+    access: owner,
+    params: ws.workspaceParams,
+    response: list(invitations.invitationView),
+  },
+  {
+    method: 'post',
+    path: `${W}/invitations`,
+    tag: 'Invitations',
+    summary: 'Invite an e-mail address with a role (the link expires in 7 days; rate-limited)',
+    access: owner,
+    params: ws.workspaceParams,
+    body: invitations.createInvitationBody,
+    response: invitations.invitationView,
+    status: 201,
+  },
+  {
+    method: 'post',
+    path: `${W}/invitations/:invitationId/resend`,
+    tag: 'Invitations',
+    summary: 'Send an invitation again with a new link (the old link stops working; rate-limited)',
+    access: owner,
+    params: invitations.invitationParams,
+    response: invitations.invitationView,
+  },
+  {
+    method: 'delete',
+    path: `${W}/invitations/:invitationId`,
+    tag: 'Invitations',
+    summary: 'Withdraw an invitation',
+    access: owner,
+    params: invitations.invitationParams,
     status: 204,
   },
   ...crud(
@@ -354,6 +495,62 @@ export const operations: Operation[] = [
   },
   {
     method: 'get',
+    path: `${W}/batches/:batchId/shares`,
+    tag: 'Sharing',
+    summary: 'Who a comparison is shared with',
+    access: editor,
+    params: projections.batchParams,
+    response: list(shares.shareView),
+  },
+  {
+    method: 'put',
+    path: `${W}/batches/:batchId/shares/:userId`,
+    tag: 'Sharing',
+    summary: 'Share a comparison with a member (a viewer then sees it, and only what is shared)',
+    access: editor,
+    params: shares.shareParams,
+    response: list(shares.shareView),
+  },
+  {
+    method: 'delete',
+    path: `${W}/batches/:batchId/shares/:userId`,
+    tag: 'Sharing',
+    summary: 'Stop sharing a comparison with a member',
+    access: editor,
+    params: shares.shareParams,
+    status: 204,
+  },
+  {
+    method: 'post',
+    path: `${W}/batches/:batchId/rerun`,
+    tag: 'Projections',
+    summary: 'Repeat a launch from its frozen inputs and seed (an exact reproduction) as a new batch (202)',
+    access: editor,
+    params: projections.batchParams,
+    response: projections.launchResponse,
+    status: 202,
+  },
+  {
+    method: 'get',
+    path: `${W}/batches/:batchId/report.pdf`,
+    tag: 'Sharing',
+    summary: 'The grower report of a finished comparison as PDF (units=metric|us)',
+    access: viewer,
+    params: projections.batchParams,
+    query: shares.reportQuery,
+    produces: 'application/pdf',
+  },
+  {
+    method: 'get',
+    path: `${W}/shared-with-me`,
+    tag: 'Sharing',
+    summary: 'Comparisons shared with you in this workspace',
+    access: viewer,
+    params: ws.workspaceParams,
+    response: list(shares.sharedComparison),
+  },
+  {
+    method: 'get',
     path: `${W}/batches/:batchId`,
     tag: 'Projections',
     summary: 'All projections of one launch (for comparison)',
@@ -361,4 +558,346 @@ export const operations: Operation[] = [
     params: projections.batchParams,
     response: list(projections.projectionView),
   },
+  {
+    method: 'get',
+    path: `${W}/sweeps/parameters`,
+    tag: 'Sweeps',
+    summary:
+      'Every numeric parameter a sweep can vary in one strategy of a scenario, with unit, valid range and base value',
+    access: viewer,
+    params: ws.workspaceParams,
+    query: sweeps.sweepParametersQuery,
+    response: sweeps.sweepParametersView,
+  },
+  {
+    method: 'post',
+    path: `${W}/sweeps/preview`,
+    tag: 'Sweeps',
+    summary:
+      'Check a sweep definition and size it (points, replicate-years, estimated run time) without saving it',
+    access: editor,
+    params: ws.workspaceParams,
+    body: sweeps.sweepBody,
+    response: sweeps.sweepPreview,
+  },
+  {
+    method: 'get',
+    path: `${W}/sweeps`,
+    tag: 'Sweeps',
+    summary: 'Sweeps of the workspace with status and progress',
+    access: viewer,
+    params: ws.workspaceParams,
+    response: list(sweeps.sweepView),
+  },
+  {
+    method: 'post',
+    path: `${W}/sweeps`,
+    tag: 'Sweeps',
+    summary:
+      'Launch a sweep: its points go onto the durable work queue (400 naming the problem, or when over the size limit)',
+    access: editor,
+    params: ws.workspaceParams,
+    body: sweeps.sweepBody,
+    response: sweeps.sweepView,
+    status: 201,
+  },
+  {
+    method: 'get',
+    path: `${W}/sweeps/:sweepId`,
+    tag: 'Sweeps',
+    summary: 'A sweep: definition, status, points done, rate and time left',
+    access: viewer,
+    params: sweeps.sweepParams,
+    response: sweeps.sweepView,
+  },
+  ...(['pause', 'resume', 'cancel'] as const).map((action): Operation => ({
+    method: 'post',
+    path: `${W}/sweeps/:sweepId/${action}`,
+    tag: 'Sweeps',
+    summary: `${action.charAt(0).toUpperCase()}${action.slice(1)} a sweep (409 when its status does not allow it)`,
+    access: editor,
+    params: sweeps.sweepParams,
+    response: sweeps.sweepView,
+  })),
+  {
+    method: 'get',
+    path: `${W}/sweeps/:sweepId/points`,
+    tag: 'Sweeps',
+    summary:
+      'Finished points, a page at a time, sorted by index, a parameter (p0, p1, …) or an outcome; filter=failed lists failed points with their error',
+    access: viewer,
+    params: sweeps.sweepParams,
+    query: sweeps.sweepPointsQuery,
+    response: sweeps.sweepPointsPage,
+  },
+  {
+    method: 'get',
+    path: `${W}/sweeps/:sweepId/analysis`,
+    tag: 'Sweeps',
+    summary:
+      "The design's analysis of one outcome (tornado, PRCC, Sobol' indices or main effects) and its scatter against each parameter",
+    access: viewer,
+    params: sweeps.sweepParams,
+    query: sweeps.sweepAnalysisQuery,
+    response: sweeps.sweepAnalysis,
+  },
+  {
+    method: 'get',
+    path: `${W}/sweeps/:sweepId/results.csv`,
+    tag: 'Sweeps',
+    summary: 'Tidy CSV: one row per point and outcome, with the parameter values as columns',
+    access: viewer,
+    params: sweeps.sweepParams,
+    produces: 'text/csv',
+  },
+  {
+    method: 'get',
+    path: `${W}/sweeps/:sweepId/results.json`,
+    tag: 'Sweeps',
+    summary: 'The sweep and every finished point as JSON',
+    access: viewer,
+    params: sweeps.sweepParams,
+    response: sweeps.sweepResults,
+  },
+  ...crud(
+    'Lessons',
+    `${W}/lessons`,
+    ':lessonId',
+    lessons.lessonParams,
+    lessons.lessonBody,
+    lessons.lessonView,
+    'lesson',
+  ).map((op): Operation =>
+    op.method === 'get' && op.path === `${W}/lessons`
+      ? { ...op, response: list(lessons.lessonListItem) }
+      : op,
+  ),
+  {
+    method: 'post',
+    path: `${W}/lessons/:lessonId/link`,
+    tag: 'Lessons',
+    summary: 'Make the lesson’s class link (the token is shown once; an earlier link stops working)',
+    access: editor,
+    params: lessons.lessonParams,
+    response: lessons.createdClassLink,
+    status: 201,
+  },
+  {
+    method: 'delete',
+    path: `${W}/lessons/:lessonId/link`,
+    tag: 'Lessons',
+    summary: 'Revoke the lesson’s class link',
+    access: editor,
+    params: lessons.lessonParams,
+    status: 204,
+  },
+  {
+    method: 'post',
+    path: `${W}/lessons/:lessonId/replay`,
+    tag: 'Lessons',
+    summary: 'Replay the lesson with chance: seeded replicates of its runs, as quantile bands (rate-limited)',
+    access: viewer,
+    params: lessons.lessonParams,
+    body: lessons.replayBody,
+    response: lessons.replayResponse,
+  },
+  {
+    method: 'get',
+    path: '/class/:token',
+    tag: 'Class links',
+    summary:
+      'The one lesson a class link shows: its definition, the profile parameters it runs on and its species card',
+    access: 'public',
+    params: lessons.classParams,
+    response: lessons.classLessonView,
+  },
+  {
+    method: 'post',
+    path: '/class/:token/replay',
+    tag: 'Class links',
+    summary: 'Replay the class link’s lesson with chance (rate-limited per link and per address)',
+    access: 'public',
+    params: lessons.classParams,
+    body: lessons.replayBody,
+    response: lessons.replayResponse,
+  },
+  {
+    method: 'get',
+    path: '/class/:token/photos/:photoId',
+    tag: 'Class links',
+    summary: 'A photo of the class link’s species card (JPEG or PNG)',
+    access: 'public',
+    params: lessons.classPhotoParams,
+    produces: 'image',
+  },
+  {
+    method: 'get',
+    path: `${W}/profiles/:profileId/card`,
+    tag: 'Species cards',
+    summary: 'The species card of a profile (404 if it has none yet)',
+    access: viewer,
+    params: cards.cardParams,
+    response: cards.speciesCardView,
+  },
+  {
+    method: 'put',
+    path: `${W}/profiles/:profileId/card`,
+    tag: 'Species cards',
+    summary: 'Write the species card of a profile (created if absent)',
+    access: editor,
+    params: cards.cardParams,
+    body: cards.speciesCardBody,
+    response: cards.speciesCardView,
+  },
+  {
+    method: 'delete',
+    path: `${W}/profiles/:profileId/card`,
+    tag: 'Species cards',
+    summary: 'Delete the species card of a profile and its photos',
+    access: editor,
+    params: cards.cardParams,
+    status: 204,
+  },
+  {
+    method: 'post',
+    path: `${W}/profiles/:profileId/card/photos`,
+    tag: 'Species cards',
+    summary:
+      'Add a photo: multipart/form-data with "photo" (JPEG or PNG, at most 5 MB; resized to 1600 px, metadata removed) and "caption"',
+    access: editor,
+    params: cards.cardParams,
+    upload: { file: 'photo', fields: ['caption'] },
+    response: cards.speciesCardView,
+    status: 201,
+  },
+  {
+    method: 'get',
+    path: `${W}/profiles/:profileId/card/photos/:photoId`,
+    tag: 'Species cards',
+    summary: 'A photo of the card (JPEG or PNG)',
+    access: viewer,
+    params: cards.photoParams,
+    produces: 'image',
+  },
+  {
+    method: 'delete',
+    path: `${W}/profiles/:profileId/card/photos/:photoId`,
+    tag: 'Species cards',
+    summary: 'Remove a photo from the card',
+    access: editor,
+    params: cards.photoParams,
+    status: 204,
+  },
+  ...recordOperations(),
 ];
+
+/** Field records: templates, preview and all-or-nothing import, originals, estimates, adoption. */
+function recordOperations(): Operation[] {
+  const R = `${W}/fields/:fieldId/records`;
+  const tag = 'Field records';
+  const upload = { file: 'file', fields: ['kind'] };
+  const form =
+    'multipart/form-data with "file" (CSV or spreadsheet-exported CSV, UTF-8, at most 10 MB; 413 above), "kind" (seedbank-samples, plant-counts, germination-tests, efficacy-trials) and, for efficacy trials, "check" (the untreated check as in the treatment column)';
+  return [
+    {
+      method: 'get',
+      path: '/records/templates/:kind',
+      tag,
+      summary:
+        'A CSV template for one kind of records, with a # header comment explaining each column and its unit',
+      access: 'public',
+      params: records.templateParams,
+      produces: 'text/csv',
+    },
+    {
+      method: 'post',
+      path: `${R}/preview`,
+      tag,
+      summary: `Parse and check a file without saving anything: rows in stored units, unit conversions, row-level problems and the estimates it would give. ${form}`,
+      access: editor,
+      params: records.recordsParams,
+      upload,
+      response: records.previewReport,
+    },
+    {
+      method: 'post',
+      path: `${R}/uploads`,
+      tag,
+      summary: `Import a file all or nothing (any problem: 400 and nothing saved; the same file twice: 409); the original is kept. ${form}`,
+      access: editor,
+      params: records.recordsParams,
+      upload,
+      response: records.uploadView,
+      status: 201,
+    },
+    {
+      method: 'get',
+      path: `${R}/uploads`,
+      tag,
+      summary: "The field's uploads, newest first, with their SHA-256",
+      access: viewer,
+      params: records.recordsParams,
+      response: list(records.uploadView),
+    },
+    {
+      method: 'get',
+      path: `${R}/uploads/:uploadId/file`,
+      tag,
+      summary: 'The original file, byte for byte (Repr-Digest: its SHA-256)',
+      access: viewer,
+      params: records.uploadParams,
+      produces: 'text/csv',
+    },
+    {
+      method: 'delete',
+      path: `${R}/uploads/:uploadId`,
+      tag,
+      summary: 'Remove an upload and its rows (adopted values and their notes stay)',
+      access: editor,
+      params: records.uploadParams,
+      status: 204,
+    },
+    {
+      method: 'get',
+      path: `${R}/estimates`,
+      tag,
+      summary:
+        'Estimates with intervals: seedbank per layer and year, seed decay, plant densities and transitions, germination per temperature, efficacy per treatment and timing with the RCBD ANOVA and Fisher’s LSD',
+      access: viewer,
+      params: records.recordsParams,
+      response: records.fieldEstimates,
+    },
+    {
+      method: 'get',
+      path: `${R}/adoptions`,
+      tag,
+      summary:
+        'Estimates adopted from this field’s records, with their source notes and whether they still hold',
+      access: viewer,
+      params: records.recordsParams,
+      response: list(records.adoptionView),
+    },
+    {
+      method: 'post',
+      path: `${R}/adoptions`,
+      tag,
+      summary:
+        'Adopt an estimate into a species profile parameter (not a built-in profile: copy it first), a strategy step’s efficacy or the field’s initial seedbank; the source note names the upload and the estimate',
+      access: editor,
+      params: records.recordsParams,
+      body: records.adoptBody,
+      response: records.adoptionView,
+      status: 201,
+    },
+    {
+      method: 'get',
+      path: `${W}/strategies/:strategyId/sources`,
+      tag,
+      summary:
+        'Source notes of a strategy’s steps, keyed like "steps[1].efficacy" (notes of edited steps are left out)',
+      access: viewer,
+      params: records.strategySourcesParams,
+      response: records.stepSources,
+    },
+  ];
+}

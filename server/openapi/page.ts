@@ -13,7 +13,7 @@ export function referencePage(version: string) {
       { tags: string[]; summary: string; description: string; requestBody?: unknown; parameters: unknown[] },
     ][]) {
       const body = op.requestBody
-        ? `<details><summary>Request body schema</summary><pre>${esc(JSON.stringify((op.requestBody as { content: { 'application/json': { schema: unknown } } }).content['application/json'].schema, null, 2))}</pre></details>`
+        ? `<details><summary>Request body schema</summary><pre>${esc(JSON.stringify(Object.values((op.requestBody as { content: Record<string, { schema: unknown }> }).content)[0].schema, null, 2))}</pre></details>`
         : '';
       const html = `<section><h3><code>${method.toUpperCase()} ${esc(path)}</code></h3><p>${esc(op.summary)}. ${esc(op.description)}</p>${body}</section>`;
       byTag.set(op.tags[0], [...(byTag.get(op.tags[0]) ?? []), html]);

@@ -14,12 +14,17 @@ export function createProjectionRunner(
   db: Database,
   pool: ProjectionPool,
   logger: Logger,
-  options: { maxQueued: number },
+  options: { maxQueued: number; onFinished?: (id: string) => Promise<void> },
 ) {
   const queue: string[] = [];
   const running = new Map<string, AbortController>();
   let pumping: Promise<void> | null = null;
   let stopped = false;
+
+  /** Tells the listener (notices) that a projection ended; its failure never stops the queue. */
+  async function finished(id: string) {
+    await options.onFinished?.(id).catch((err) => logger.error({ err, projection: id }, 'onFinished failed'));
+  }
 
   async function runOne(id: string) {
     const row = await findProjectionById(db, id);
@@ -66,13 +71,18 @@ export function createProjectionRunner(
     } finally {
       running.delete(id);
     }
+    if (!stopped) await finished(id);
   }
 
   function pump() {
+    // The reset runs in .finally, after the assignment: reset inside the async body, an
+    // empty queue would clear `pumping` before `??=` stored the settled promise, and no
+    // later enqueue would ever start the loop again.
     pumping ??= (async () => {
       while (queue.length && !stopped) await runOne(queue.shift()!);
+    })().finally(() => {
       pumping = null;
-    })();
+    });
     return pumping;
   }
 
@@ -90,6 +100,7 @@ export function createProjectionRunner(
       if (i >= 0) {
         queue.splice(i, 1);
         await updateProjection(db, id, { status: 'cancelled', finishedAt: new Date() });
+        await finished(id);
         return true;
       }
       const controller = running.get(id);

@@ -25,6 +25,8 @@ export function authRoutes(ctx: AppContext) {
 
   r.post('/auth/sign-up', async (req, res) => {
     const body = parse(signUpBody, req.body);
+    // An invitation's secret rides along: limited like the invitation's own endpoints.
+    if (body.invitationToken) await ctx.linkLimiters.linksPerAddress.consume(clientIp(req));
     const user = await signUp(db, body, clientIp(req));
     await establishSession(req, user.id);
     res.status(201).json(await sessionViewOf(db, user));

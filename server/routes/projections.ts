@@ -14,6 +14,7 @@ import {
   launch,
   projectionSnapshot,
   recentProjections,
+  rerunBatch,
 } from '../services/projections';
 import {
   createScenario,
@@ -91,6 +92,10 @@ export function projectionRoutes(ctx: AppContext) {
       .type('text/csv')
       .attachment(`projection-${p.projectionId.slice(0, 8)}-seed-${scenario.seed}-replicates.csv`)
       .send(csv);
+  });
+  r.post('/workspaces/:workspaceId/batches/:batchId/rerun', async (req, res) => {
+    const p = parse(batchParams, req.params, 'path');
+    res.status(202).json(await rerunBatch(db, runner, signedInUser(res).id, p.workspaceId, p.batchId));
   });
   r.get('/workspaces/:workspaceId/batches/:batchId', async (req, res) => {
     const p = parse(batchParams, req.params, 'path');

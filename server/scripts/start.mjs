@@ -53,9 +53,13 @@ try {
   const env = { ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), SEEDWAKE_DATA_DIR: dataDir };
   const tsx = join(root, 'node_modules', '.bin', 'tsx');
   await step('migrations and demo data', () => run(tsx, ['server/scripts/prepare.ts'], { cwd: root, env }));
+  // vite build ships React's development build unless NODE_ENV is production.
   if (!dev)
     await step('client build', () =>
-      run(join(root, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], { cwd: root, env }),
+      run(join(root, 'node_modules', '.bin', 'vite'), ['build', '--logLevel', 'warn'], {
+        cwd: root,
+        env: { ...env, NODE_ENV: 'production' },
+      }),
     );
 
   const server = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {

@@ -10,7 +10,13 @@ export type AuditEvent =
   | 'password_changed'
   | 'member_added'
   | 'role_changed'
-  | 'member_removed';
+  | 'member_removed'
+  | 'invitation_sent'
+  | 'invitation_resent'
+  | 'invitation_revoked'
+  | 'invitation_accepted'
+  | 'password_reset_requested'
+  | 'password_reset';
 
 /** Security-relevant events go to the audit log; failures here must not break the request. */
 export async function audit(

@@ -5,6 +5,7 @@ import { findUserByEmail, findUserById, insertUser, updateUser, type UserRow } f
 import { insertMembership, insertWorkspace, listMembershipsOfUser } from '../db/queries/workspaces';
 import { audit } from './audit';
 import { conflict, invalid, unauthenticated } from './errors';
+import { joinByInvitation, usableInvitation, wrongAddress } from './invitations';
 import { hashPassword, timingDummyHash, verifyPassword } from './passwords';
 import type { SignInLimiter } from './rate-limits';
 
@@ -21,10 +22,17 @@ export async function sessionViewOf(db: Database, user: UserRow): Promise<Sessio
   };
 }
 
-/** Creates the user and a personal workspace the user owns. */
+/**
+ * Creates the user and a personal workspace the user owns; with an invitation's secret,
+ * the new account also joins the inviting workspace and the invitation is used up.
+ */
 export async function signUp(db: Database, body: SignUpBody, ip: string) {
   if (await findUserByEmail(db, body.email)) {
     throw conflict('An account with this e-mail already exists; sign in instead');
+  }
+  const invitation = body.invitationToken ? await usableInvitation(db, body.invitationToken) : undefined;
+  if (invitation && invitation.email !== body.email) {
+    throw invalid(wrongAddress(invitation), { email: wrongAddress(invitation) });
   }
   const now = new Date();
   const user = {
@@ -45,8 +53,12 @@ export async function signUp(db: Database, body: SignUpBody, ip: string) {
       createdAt: now,
     });
     await insertMembership(tx, { workspaceId, userId: user.id, role: 'owner', createdAt: now });
+    if (invitation) await joinByInvitation(tx, invitation, user.id);
   });
   await audit(db, 'sign_up', { userId: user.id, ip });
+  if (invitation) {
+    await audit(db, 'invitation_accepted', { userId: user.id, workspaceId: invitation.workspaceId, ip });
+  }
   return user;
 }
 

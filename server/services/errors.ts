@@ -21,6 +21,8 @@ export const forbidden = (message = 'Your role in this workspace does not allow 
   new AppError(403, 'forbidden', message);
 export const notFound = (what = 'That') => new AppError(404, 'not_found', `${what} was not found`);
 export const conflict = (message: string) => new AppError(409, 'conflict', message);
+/** A link that was real but no longer works: expired, used or revoked. */
+export const gone = (message: string) => new AppError(410, 'gone', message);
 export const rateLimited = (retryAfterSeconds: number, message = 'Too many attempts; try again later') =>
   new AppError(429, 'rate_limited', message, undefined, {
     'Retry-After': String(Math.max(1, Math.ceil(retryAfterSeconds))),

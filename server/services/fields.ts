@@ -12,6 +12,7 @@ import {
 import { requireRole } from './access';
 import { conflict, notFound } from './errors';
 import { isReferenced } from './references';
+import { canSee, visibilityFor } from './visibility';
 
 export const toFieldView = (r: FieldRow): FieldView => ({
   id: r.id,
@@ -30,12 +31,14 @@ async function existing(db: Database, workspaceId: string, id: string) {
 }
 
 export async function listFieldViews(db: Database, userId: string, workspaceId: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  return (await listFields(db, workspaceId)).map(toFieldView);
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const v = await visibilityFor(db, workspaceId, userId, role);
+  return (await listFields(db, workspaceId)).filter((f) => canSee(v, 'fieldIds', f.id)).map(toFieldView);
 }
 
 export async function getField(db: Database, userId: string, workspaceId: string, id: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  if (!canSee(await visibilityFor(db, workspaceId, userId, role), 'fieldIds', id)) throw notFound('Field');
   return toFieldView(await existing(db, workspaceId, id));
 }
 

@@ -12,6 +12,8 @@ import {
 import { requireRole } from './access';
 import { conflict, forbidden, notFound } from './errors';
 import { isReferenced } from './references';
+import { lessonUsingProfile } from '../db/queries/lessons';
+import { canSee, visibilityFor } from './visibility';
 
 export const toProfileView = (r: ProfileRow): ProfileView => ({
   id: r.id,
@@ -30,13 +32,19 @@ async function visible(db: Database, workspaceId: string, id: string) {
 }
 
 export async function listProfileViews(db: Database, userId: string, workspaceId: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  return (await listProfiles(db, workspaceId)).map(toProfileView);
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const v = await visibilityFor(db, workspaceId, userId, role);
+  return (await listProfiles(db, workspaceId))
+    .filter((p) => p.builtIn || canSee(v, 'profileIds', p.id))
+    .map(toProfileView);
 }
 
 export async function getProfile(db: Database, userId: string, workspaceId: string, id: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  return toProfileView(await visible(db, workspaceId, id));
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const row = await visible(db, workspaceId, id);
+  if (!row.builtIn && !canSee(await visibilityFor(db, workspaceId, userId, role), 'profileIds', id))
+    throw notFound('Species profile');
+  return toProfileView(row);
 }
 
 export async function createProfile(
@@ -106,5 +114,7 @@ export async function removeProfile(db: Database, userId: string, workspaceId: s
   await editable(db, userId, workspaceId, id);
   if (await isReferenced(db, workspaceId, { profileId: id }))
     throw conflict('A scenario uses this profile; change or delete that scenario first');
+  if (await lessonUsingProfile(db, id))
+    throw conflict('A lesson uses this profile; change or delete that lesson first');
   await deleteProfile(db, id);
 }

@@ -17,6 +17,7 @@ import { requireRole } from './access';
 import { invalid, notFound, rateLimited } from './errors';
 import { resolveParts } from './scenarios';
 import { noControl, snapshot } from './snapshots';
+import { canSee, visibilityFor } from './visibility';
 
 type Light = Omit<ProjectionRow, 'snapshot' | 'result' | 'createdBy'>;
 
@@ -170,6 +171,44 @@ export async function launch(
   };
 }
 
+/**
+ * Repeats a launch from its frozen inputs and seed — an exact reproduction, whatever has
+ * been edited since — as a new batch.
+ */
+export async function rerunBatch(
+  db: Database,
+  runner: ProjectionRunner,
+  userId: string,
+  workspaceId: string,
+  batchId: string,
+): Promise<LaunchResponse> {
+  await requireRole(db, userId, workspaceId, 'editor');
+  const old = await listBatch(db, workspaceId, batchId);
+  if (!old.length) throw notFound('Projection batch');
+  if (!runner.hasRoomFor(old.length)) {
+    throw rateLimited(30, `The projection queue is full (${runner.queued()} waiting); try again in a moment`);
+  }
+  const planned: PlannedProjection[] = old.map((r) => ({
+    label: r.label,
+    role: r.role,
+    strategyId: r.strategyId,
+    scenario: r.snapshot as Scenario,
+    year: r.letItSeedYear,
+  }));
+  const newBatch = randomUUID();
+  const rows = batchRows(
+    planned,
+    { workspaceId, scenarioId: old[0].scenarioId ?? '', batchId: newBatch, userId },
+    new Date(),
+  ).map((r) => ({ ...r, scenarioId: old[0].scenarioId }));
+  await insertProjections(db, rows);
+  runner.enqueue(rows.map((r) => r.id));
+  return {
+    batchId: newBatch,
+    projections: rows.map((r) => toListItem({ ...r, error: null, startedAt: null, finishedAt: null })),
+  };
+}
+
 export async function recentProjections(
   db: Database,
   userId: string,
@@ -177,21 +216,35 @@ export async function recentProjections(
   limit: number,
   scenarioId?: string,
 ) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  return (await listProjections(db, workspaceId, limit, scenarioId)).map(toListItem);
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const v = await visibilityFor(db, workspaceId, userId, role);
+  const rows = await listProjections(db, workspaceId, v.all ? limit : 1000, scenarioId);
+  return rows
+    .filter((r) => canSee(v, 'batchIds', r.batchId))
+    .slice(0, limit)
+    .map(toListItem);
+}
+
+/** A projection the user may read: a viewer only those in comparisons shared with them. */
+async function readable(db: Database, userId: string, workspaceId: string, id: string) {
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const row = await findProjection(db, workspaceId, id);
+  if (!row || !canSee(await visibilityFor(db, workspaceId, userId, role), 'batchIds', row.batchId)) {
+    throw notFound('Projection');
+  }
+  return row;
 }
 
 export async function getProjection(db: Database, userId: string, workspaceId: string, id: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  const row = await findProjection(db, workspaceId, id);
-  if (!row) throw notFound('Projection');
-  return toView(row);
+  return toView(await readable(db, userId, workspaceId, id));
 }
 
 export async function getBatch(db: Database, userId: string, workspaceId: string, batchId: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
   const rows = await listBatch(db, workspaceId, batchId);
-  if (!rows.length) throw notFound('Projection batch');
+  if (!rows.length || !canSee(await visibilityFor(db, workspaceId, userId, role), 'batchIds', batchId)) {
+    throw notFound('Projection batch');
+  }
   return rows.map(toView);
 }
 
@@ -211,8 +264,5 @@ export async function cancelProjection(
 
 /** The frozen input of a projection the user may read, for re-running it per replicate. */
 export async function projectionSnapshot(db: Database, userId: string, workspaceId: string, id: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  const row = await findProjection(db, workspaceId, id);
-  if (!row) throw notFound('Projection');
-  return row.snapshot as Scenario;
+  return (await readable(db, userId, workspaceId, id)).snapshot as Scenario;
 }

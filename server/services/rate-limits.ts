@@ -36,3 +36,49 @@ export function createSignInLimiter(settings: RateLimitSettings) {
   };
 }
 export type SignInLimiter = ReturnType<typeof createSignInLimiter>;
+
+export type Limit = { points: number; windowSeconds: number };
+
+/** A plain request counter: every call counts, and the one past the limit gets 429. */
+export function createLimiter(limit: Limit) {
+  const limiter = new RateLimiterMemory({ points: limit.points, duration: limit.windowSeconds });
+  return {
+    async consume(key: string) {
+      try {
+        await limiter.consume(key);
+      } catch (res) {
+        if (res instanceof Error) throw res;
+        throw rateLimited((res as RateLimiterRes).msBeforeNext / 1000);
+      }
+    },
+  };
+}
+export type Limiter = ReturnType<typeof createLimiter>;
+
+/**
+ * Limits on the endpoints that send mail or take a link's secret (OWASP Forgot Password
+ * cheat sheet: throttle reset requests; the per-address limit also slows guessing links).
+ */
+export type LinkLimitSettings = {
+  resetPerEmail: Limit;
+  resetPerAddress: Limit;
+  invitationsPerUser: Limit;
+  linksPerAddress: Limit;
+};
+
+export const defaultLinkLimits: LinkLimitSettings = {
+  resetPerEmail: { points: 3, windowSeconds: 3600 },
+  resetPerAddress: { points: 20, windowSeconds: 3600 },
+  invitationsPerUser: { points: 30, windowSeconds: 3600 },
+  linksPerAddress: { points: 60, windowSeconds: 15 * 60 },
+};
+
+export function createLinkLimiters(settings: LinkLimitSettings) {
+  return {
+    resetPerEmail: createLimiter(settings.resetPerEmail),
+    resetPerAddress: createLimiter(settings.resetPerAddress),
+    invitationsPerUser: createLimiter(settings.invitationsPerUser),
+    linksPerAddress: createLimiter(settings.linksPerAddress),
+  };
+}
+export type LinkLimiters = ReturnType<typeof createLinkLimiters>;

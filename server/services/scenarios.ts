@@ -15,6 +15,7 @@ import { findStrategies } from '../db/queries/strategies';
 import { requireRole } from './access';
 import { invalid, notFound } from './errors';
 import { snapshot } from './snapshots';
+import { canSee, visibilityFor } from './visibility';
 
 export const toScenarioView = (r: ScenarioRow): ScenarioView => ({
   id: r.id,
@@ -69,12 +70,17 @@ async function existing(db: Database, workspaceId: string, id: string) {
 }
 
 export async function listScenarioViews(db: Database, userId: string, workspaceId: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  return (await listScenarios(db, workspaceId)).map(toScenarioView);
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const v = await visibilityFor(db, workspaceId, userId, role);
+  return (await listScenarios(db, workspaceId))
+    .filter((s) => canSee(v, 'scenarioIds', s.id))
+    .map(toScenarioView);
 }
 
 export async function getScenario(db: Database, userId: string, workspaceId: string, id: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  if (!canSee(await visibilityFor(db, workspaceId, userId, role), 'scenarioIds', id))
+    throw notFound('Scenario');
   return toScenarioView(await existing(db, workspaceId, id));
 }
 

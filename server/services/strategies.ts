@@ -15,6 +15,7 @@ import { requireRole } from './access';
 import { conflict, invalid, notFound } from './errors';
 import { rateWarnings } from './rate-warnings';
 import { isReferenced } from './references';
+import { canSee, visibilityFor } from './visibility';
 
 async function toView(db: Database, r: StrategyRow): Promise<StrategyView> {
   const crop = r.fieldId ? ((await findField(db, r.workspaceId, r.fieldId))?.crop ?? null) : null;
@@ -44,12 +45,16 @@ async function checkField(db: Database, workspaceId: string, fieldId: string | n
 }
 
 export async function listStrategyViews(db: Database, userId: string, workspaceId: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
-  return Promise.all((await listStrategies(db, workspaceId)).map((r) => toView(db, r)));
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  const v = await visibilityFor(db, workspaceId, userId, role);
+  const rows = (await listStrategies(db, workspaceId)).filter((s) => canSee(v, 'strategyIds', s.id));
+  return Promise.all(rows.map((r) => toView(db, r)));
 }
 
 export async function getStrategy(db: Database, userId: string, workspaceId: string, id: string) {
-  await requireRole(db, userId, workspaceId, 'viewer');
+  const { role } = await requireRole(db, userId, workspaceId, 'viewer');
+  if (!canSee(await visibilityFor(db, workspaceId, userId, role), 'strategyIds', id))
+    throw notFound('Strategy');
   return toView(db, await existing(db, workspaceId, id));
 }
 

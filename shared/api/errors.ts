@@ -17,6 +17,7 @@ export const errorCodes = [
   'forbidden',
   'not_found',
   'conflict',
+  'gone',
   'too_large',
   'rate_limited',
   'csrf',

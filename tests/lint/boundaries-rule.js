@@ -33,7 +33,8 @@ export function allowed(from, to) {
     case 'client/shared':
       return to === 'shared' || to === 'models';
     default:
-      if (from.startsWith('client/features/')) return to === 'client/shared' || to === 'shared' || to === 'models';
+      if (from.startsWith('client/features/'))
+        return to === 'client/shared' || to === 'shared' || to === 'models';
       return true;
   }
 }
@@ -42,7 +43,9 @@ export const boundariesRule = {
   meta: {
     type: 'problem',
     docs: { description: 'Keep imports flowing one way between Seedwake layers' },
-    messages: { crossing: '{{from}} may not import {{to}} ("{{source}}"); see DEVELOPERS.md, Import boundaries.' },
+    messages: {
+      crossing: '{{from}} may not import {{to}} ("{{source}}"); see DEVELOPERS.md, Import boundaries.',
+    },
     schema: [],
   },
   create(context) {

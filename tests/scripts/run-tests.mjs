@@ -25,9 +25,10 @@ let mariadb = null;
 let code = 0;
 try {
   await step('npm dependencies', () => ensureNodeModules(root));
-  await step('MariaDB and Chromium packages', () => {
+  await step('MariaDB, Chromium and poppler packages', () => {
     ensureMariadbInstalled();
     ensureDebianPackage('chromium', 'chromium');
+    ensureDebianPackage('pdftoppm', 'poppler-utils');
   });
   wipe(dir);
   mkdirSync(outDir, { recursive: true });
@@ -54,8 +55,14 @@ try {
     await step('typecheck', () => run(bin('tsc'), ['-p', 'tsconfig.json', '--noEmit'], { cwd: root }));
     await step('lint', () => run(bin('eslint'), ['-c', 'tests/lint/eslint.config.js', '.'], { cwd: root }));
   }
+  // vite build ships React's development build unless NODE_ENV is production.
   if (!only.length || only.some((p) => p.includes('browser')))
-    await step('client build', () => run(bin('vite'), ['build', '--logLevel', 'warn'], { cwd: root, env }));
+    await step('client build', () =>
+      run(bin('vite'), ['build', '--logLevel', 'warn'], {
+        cwd: root,
+        env: { ...env, NODE_ENV: 'production' },
+      }),
+    );
   const report = join(outDir, 'vitest.json');
   await step('vitest (unit, api, browser)', () =>
     run(

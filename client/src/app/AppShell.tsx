@@ -1,5 +1,6 @@
 import { Link, NavLink, Outlet, useMatch } from 'react-router-dom';
 import { SignOutButton } from '../features/auth/SignOutButton';
+import { NotificationsMenu } from '../features/notifications/NotificationsMenu';
 import { WorkspaceSwitcher } from '../features/workspaces/WorkspaceSwitcher';
 import { HorizonRule } from '../shared/components/HorizonRule';
 import { UnitsSwitch } from '../shared/components/UnitsSwitch';
@@ -35,9 +36,27 @@ export function AppShell() {
           <div className="order-last flex w-full flex-wrap items-center gap-x-5 gap-y-2 lg:order-none lg:w-auto lg:flex-1">
             <WorkspaceSwitcher />
             {workspaceId ? (
-              <nav aria-label="Workspace" className="flex items-center gap-4">
+              <nav aria-label="Workspace" className="flex flex-wrap items-center gap-x-4">
                 <NavLink to={`/w/${workspaceId}`} end className={navLinkClass}>
                   Overview
+                </NavLink>
+                <NavLink to={`/w/${workspaceId}/fields`} className={navLinkClass}>
+                  Fields
+                </NavLink>
+                <NavLink to={`/w/${workspaceId}/profiles`} className={navLinkClass}>
+                  Profiles
+                </NavLink>
+                <NavLink to={`/w/${workspaceId}/strategies`} className={navLinkClass}>
+                  Strategies
+                </NavLink>
+                <NavLink to={`/w/${workspaceId}/scenarios`} className={navLinkClass}>
+                  Scenarios
+                </NavLink>
+                <NavLink to={`/w/${workspaceId}/sweeps`} className={navLinkClass}>
+                  Sweeps
+                </NavLink>
+                <NavLink to={`/w/${workspaceId}/lessons`} className={navLinkClass}>
+                  Lessons
                 </NavLink>
                 <NavLink to={`/w/${workspaceId}/members`} className={navLinkClass}>
                   Members
@@ -49,6 +68,7 @@ export function AppShell() {
             </div>
           </div>
           <div className="ml-auto flex items-center gap-1 lg:ml-0">
+            <NotificationsMenu />
             <NavLink
               to="/account"
               className={({ isActive }) =>

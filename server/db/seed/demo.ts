@@ -1,13 +1,18 @@
-import { eq } from 'drizzle-orm';
+import { and, eq } from 'drizzle-orm';
 import type { Database } from '../client';
 import { memberships, users, workspaces } from '../schema';
 import { fields, projections, scenarios, speciesProfiles, strategies } from '../schema-domain';
+import { shares } from '../schema-shares';
 import { hashPassword } from '../../services/passwords';
 import { batchRows, planBatch } from '../../services/projections';
 import { runReplicates } from '../../../models/projection/replicates';
 import { finishProjection } from '../../projections/outcome';
 import { DEMO_PASSWORD, demoPeople, demoWorkspace } from './demo-people';
 import { builtInProfiles, demoFields, demoScenario, demoStrategies } from './demo-library';
+import { seedTeaching } from './demo-lessons';
+import { seedFieldRecords } from './demo-records';
+
+const DEMO_BATCH_ID = '5eedfa00-0000-4000-8000-000000000501';
 
 /** Inserts a row by id unless it is there; returns whether it was added. */
 async function ensure(exists: () => Promise<unknown[]>, insert: () => Promise<unknown>): Promise<boolean> {
@@ -100,6 +105,29 @@ export async function seedDemo(db: Database) {
     await seedCompletedComparison(db, now);
     added++;
   }
+  // The grower (a viewer) sees the demo comparison because it is shared with them.
+  const grower = demoPeople.find((p) => p.role === 'viewer')!;
+  count(
+    await ensure(
+      () =>
+        db
+          .select({ batchId: shares.batchId })
+          .from(shares)
+          .where(and(eq(shares.batchId, DEMO_BATCH_ID), eq(shares.userId, grower.id))),
+      () =>
+        db
+          .insert(shares)
+          .values({
+            workspaceId: demoWorkspace.id,
+            batchId: DEMO_BATCH_ID,
+            userId: grower.id,
+            sharedBy: demoPeople[1].id,
+            createdAt: now,
+          }),
+    ),
+  );
+  added += await seedTeaching(db, now);
+  added += await seedFieldRecords(db, now);
   return added ? `added ${added} demo rows` : 'already present';
 }
 
@@ -124,7 +152,7 @@ async function seedCompletedComparison(db: Database, now: Date) {
     {
       workspaceId: demoWorkspace.id,
       scenarioId: demoScenario.id,
-      batchId: '5eedfa00-0000-4000-8000-000000000501',
+      batchId: DEMO_BATCH_ID,
       userId: demoPeople[1].id,
     },
     now,

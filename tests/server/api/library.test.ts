@@ -97,7 +97,7 @@ describe('fields and strategies', () => {
 });
 
 describe('roles and isolation', () => {
-  it('a viewer reads but cannot write (403); another workspace gets 404', async () => {
+  it('a viewer cannot write (403) and does not see what is not shared (404); another workspace gets 404', async () => {
     const owner = await signUp(t.app, 'o');
     const viewer = await signUp(t.app, 'v');
     const stranger = await signUp(t.app, 's');
@@ -107,8 +107,9 @@ describe('roles and isolation', () => {
     const field = (await owner.agent.post(`/api/workspaces/${owner.workspaceId}/fields`).send(fieldBody()))
       .body;
     expect((await viewer.agent.get(`/api/workspaces/${owner.workspaceId}/fields/${field.id}`)).status).toBe(
-      200,
+      404,
     );
+    expect((await viewer.agent.get(`/api/workspaces/${owner.workspaceId}/fields`)).body).toEqual([]);
     expect(
       (await viewer.agent.post(`/api/workspaces/${owner.workspaceId}/fields`).send(fieldBody())).status,
     ).toBe(403);

@@ -142,3 +142,24 @@ describe('projections in the worker pool', () => {
     expect(lines).toHaveLength(2 + 60 * 11);
   });
 });
+
+describe('re-running a launch', () => {
+  it('repeats it from the frozen inputs: the same numbers even after the scenario was edited', async () => {
+    const u = await signUp(t.app, 'rerun');
+    const { scenario } = await buildScenario(u.agent, u.workspaceId);
+    const first = (
+      await u.agent.post(`/api/workspaces/${u.workspaceId}/scenarios/${scenario.id}/runs`).send({})
+    ).body;
+    for (const p of first.projections) await waitForProjection(u.agent, u.workspaceId, p.id);
+    await u.agent
+      .put(`/api/workspaces/${u.workspaceId}/scenarios/${scenario.id}`)
+      .send({ ...scenario, id: undefined, updatedAt: undefined, replicates: 30 });
+    const again = await u.agent.post(`/api/workspaces/${u.workspaceId}/batches/${first.batchId}/rerun`);
+    expect(again.status).toBe(202);
+    expect(again.body.batchId).not.toBe(first.batchId);
+    const a = await waitForProjection(u.agent, u.workspaceId, first.projections[0].id);
+    const b = await waitForProjection(u.agent, u.workspaceId, again.body.projections[0].id);
+    expect(b.snapshot).toEqual(a.snapshot);
+    expect(b.result.summary).toEqual(a.result.summary);
+  });
+});

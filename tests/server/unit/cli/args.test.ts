@@ -21,8 +21,8 @@ describe('sim arguments', () => {
       const r = parseArgs(argv);
       return r.ok ? '' : r.message.split('\n')[0];
     };
-    expect(message([])).toBe('missing command (project or analyze)');
-    expect(message(['run', 'a.json'])).toBe('unknown command "run" (project or analyze)');
+    expect(message([])).toBe('missing command (project, analyze or sweep)');
+    expect(message(['run', 'a.json'])).toBe('unknown command "run" (project, analyze or sweep)');
     expect(message(['project'])).toBe('project needs a file name');
     expect(message(['project', 'a.json', 'b.json'])).toBe('project takes one file, got 2: a.json b.json');
     expect(message(['project', 'a.json', '--seed'])).toBe('--seed needs a value');
