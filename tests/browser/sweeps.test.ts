@@ -69,11 +69,12 @@ describe('a sensitivity sweep on the demo', () => {
       await page.getByRole('button', { name: 'Add parameter' }).click();
     }
     await page.getByRole('radio', { name: /One at a time/ }).check();
-    await page.getByLabel('Replicates per point').fill('4000');
+    // Big enough points (one per chunk, about a second each) that a pause lands mid-sweep.
+    await page.getByLabel('Replicates per point').fill('20000');
     // One at a time over k = 4 parameters: the base point and each parameter at min and at
     // max, 2k + 1 = 9 points (Saltelli et al. 2008, The Primer — recalled from memory).
     await expect.poll(() => page.getByText('9 points', { exact: true }).count(), SLOW).toBe(1);
-    await expect.poll(() => page.getByText('360,000 replicate-years').count()).toBe(1);
+    await expect.poll(() => page.getByText('1,800,000 replicate-years').count()).toBe(1);
     await expectNoSeriousViolations(page);
 
     await page.getByRole('button', { name: 'Launch sweep' }).click();
