@@ -2,7 +2,7 @@ import { describe, it, expect } from 'vitest';
 import { streamFor, Xoshiro128StarStar } from '../../../models/random/stream';
 import { chiSquareContinuous, correlation, drawMany } from './stats';
 
-// Independent BigInt transcription of the published xoshiro128** reference code
+// Independent BigInt re-implementation of the published xoshiro128** reference code
 // (Blackman & Vigna 2018, xoshiro128starstar.c at prng.di.unimi.it):
 //   result = rotl(s[1] * 5, 7) * 9; t = s[1] << 9;
 //   s[2] ^= s[0]; s[3] ^= s[1]; s[1] ^= s[2]; s[0] ^= s[3]; s[2] ^= t; s[3] = rotl(s[3], 11);
