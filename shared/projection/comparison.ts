@@ -19,6 +19,8 @@ export type ComparisonRow = {
   depletionAtHorizon: number;
   /** Median years to a 90 % decline; null when fewer than half the replicates get there. */
   declineYears: number | null;
+  /** Share of replicates reaching a 90 % decline within the horizon. */
+  declineReached: number;
   /** Median cumulative cost over the horizon (currency/ha). */
   cumulativeCost: number;
   /** Mean over years 1..H of the mean yearly yield loss (%). */
@@ -41,6 +43,7 @@ export function comparisonRows(runs: readonly ComparedRun[]): ComparisonRow[] {
     const total = s.series.seedbankTotal;
     const loss = s.economics.yieldLossPercent.mean.slice(1);
     const npv = s.economics.npvPerHa;
+    const decline = s.decline.find((d) => d.fraction === 0.9);
     return {
       id,
       label,
@@ -52,7 +55,8 @@ export function comparisonRows(runs: readonly ComparedRun[]): ComparisonRow[] {
         q95: total.q95[year],
       })),
       depletionAtHorizon: s.depletionProbability[H],
-      declineYears: s.decline.find((d) => d.fraction === 0.9)?.medianYears ?? null,
+      declineYears: decline?.medianYears ?? null,
+      declineReached: decline?.proportionReached ?? 0,
       cumulativeCost: s.economics.cumulativeCostPerHa.q50[H],
       yieldLossPercent: loss.length ? loss.reduce((a, b) => a + b, 0) / loss.length : 0,
       npv: { mean: npv.mean, median: npv.q50, q05: npv.q05, q95: npv.q95 },

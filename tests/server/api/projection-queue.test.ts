@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { signUp, testApp } from '../../support/test-app';
+import mysql from 'mysql2/promise';
+import { PASSWORD, browserLike, signUp, testApp } from '../../support/test-app';
 import { buildScenario, waitForProjection } from '../../support/domain';
 
 async function waitForStatus(
@@ -78,25 +79,17 @@ describe('the projection queue', () => {
     const get = async () => (await u.agent.get(`/api/workspaces/${u.workspaceId}/projections/${id}`)).body;
     await waitForStatus(get, (p) => p.status === 'running');
     await first.close();
-    const [rows] = await (
-      await import('mysql2/promise')
-    )
-      .createConnection(process.env.DATABASE_URL!)
-      .then(async (c) => {
-        const r = await c.query('SELECT status FROM projections WHERE id = ?', [id]);
-        await c.end();
-        return r;
-      });
+    const connection = await mysql.createConnection(process.env.DATABASE_URL!);
+    const [rows] = await connection.query('SELECT status FROM projections WHERE id = ?', [id]);
+    await connection.end();
     expect((rows as { status: string }[])[0].status).toBe('running');
 
     const second = testApp();
     try {
       const resumed = await second.ctx.projections.runner.recover();
       expect(resumed).toBeGreaterThanOrEqual(1);
-      const agent = (await import('../../support/test-app')).browserLike(second.app);
-      await agent
-        .post('/api/auth/sign-in')
-        .send({ email: u.email, password: (await import('../../support/test-app')).PASSWORD });
+      const agent = browserLike(second.app);
+      await agent.post('/api/auth/sign-in').send({ email: u.email, password: PASSWORD });
       const done = await waitForProjection(agent, u.workspaceId, id, 120_000);
       expect(done.status).toBe('done');
       expect(done.replicatesDone).toBe(6000);

@@ -19,6 +19,20 @@ const scaleOptions = [
   { value: 'log', label: 'Log' },
 ] as const;
 
+/** The two plant-stage charts differ only in the series they draw. */
+const plantCharts = [
+  {
+    series: 'established',
+    name: 'Established plants',
+    lead: 'Median established plants of each strategy at each census.',
+  },
+  {
+    series: 'flowering',
+    name: 'Flowering plants',
+    lead: 'Median flowering plants: the ones that can set seed.',
+  },
+] as const;
+
 /** A sentence naming each line's median at the horizon, read out in place of the drawing. */
 function describe(
   compared: readonly Compared[],
@@ -124,50 +138,31 @@ export function ComparisonCharts({
             height={320}
           />
         </ChartFrame>
-        <ChartFrame
-          title={`Established plants (${units.plantUnit})`}
-          exportSubtitle={subtitle}
-          filename={`${stem}-established`}
-          lead="Median established plants of each strategy at each census."
-        >
-          <BandChart
-            title={`Established plants of each strategy, in ${units.plantUnit}`}
-            summary={describe(
-              compared,
-              'Median established plants',
-              (s) => s.series.established.q50.map(units.density),
-              plants,
-            )}
-            x={x}
-            series={lines((s) => s.series.established, units.density)}
-            yLabel={units.plantUnit}
-            formatValue={plants}
-            bandLegend={legend}
-            height={320}
-          />
-        </ChartFrame>
-        <ChartFrame
-          title={`Flowering plants (${units.plantUnit})`}
-          exportSubtitle={subtitle}
-          filename={`${stem}-flowering`}
-          lead="Median flowering plants: the ones that can set seed."
-        >
-          <BandChart
-            title={`Flowering plants of each strategy, in ${units.plantUnit}`}
-            summary={describe(
-              compared,
-              'Median flowering plants',
-              (s) => s.series.flowering.q50.map(units.density),
-              plants,
-            )}
-            x={x}
-            series={lines((s) => s.series.flowering, units.density)}
-            yLabel={units.plantUnit}
-            formatValue={plants}
-            bandLegend={legend}
-            height={320}
-          />
-        </ChartFrame>
+        {plantCharts.map((c) => (
+          <ChartFrame
+            key={c.series}
+            title={`${c.name} (${units.plantUnit})`}
+            exportSubtitle={subtitle}
+            filename={`${stem}-${c.series}`}
+            lead={c.lead}
+          >
+            <BandChart
+              title={`${c.name} of each strategy, in ${units.plantUnit}`}
+              summary={describe(
+                compared,
+                `Median ${c.name.toLowerCase()}`,
+                (s) => s.series[c.series].q50.map(units.density),
+                plants,
+              )}
+              x={x}
+              series={lines((s) => s.series[c.series], units.density)}
+              yLabel={units.plantUnit}
+              formatValue={plants}
+              bandLegend={legend}
+              height={320}
+            />
+          </ChartFrame>
+        ))}
         <ChartFrame
           title="Probability of depletion"
           exportSubtitle={subtitle}

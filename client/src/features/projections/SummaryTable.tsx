@@ -5,7 +5,8 @@ import { Button } from '../../shared/components/Button';
 import { downloadCsv } from '../../shared/lib/csv';
 import { fileSlug } from '../../shared/lib/download';
 import { useCurrentWorkspace } from '../../shared/lib/currentWorkspace';
-import { checkpointYears, summaryCsv, summaryRows, type Compared } from './comparison';
+import { summaryCsv, summaryRows, type Compared } from './comparison';
+import { checkpointYears } from '../../../../shared/projection/comparison';
 import { formatAmount, formatMoney, formatPercent, formatSignedMoney, useDisplayUnits } from './display';
 
 const th = 'px-3 py-2 text-right align-bottom font-semibold';

@@ -3,6 +3,7 @@ import type { CsvCell } from '../../shared/lib/csv';
 import type { DisplayUnits } from './display';
 import { inDisplayOrder, isFinished, type FinishedProjection } from './result';
 import type { ProjectionView } from '../../../../shared/api/projections';
+import { checkpointYears, comparisonRows } from '../../../../shared/projection/comparison';
 
 /*
  * The numbers of a comparison: one row per strategy and one for No control, each read
@@ -20,11 +21,6 @@ export function comparedProjections(views: readonly ProjectionView[]): Compared[
     const style = v.role === 'baseline' ? baselineStyle : strategyStyles[next++ % strategyStyles.length];
     return isFinished(v) ? [{ projection: v, style }] : [];
   });
-}
-
-/** Years the table reports the seedbank at: 5 and 10, or the horizon when it is shorter, and the horizon. */
-export function checkpointYears(horizon: number): number[] {
-  return [...new Set([5, 10, horizon].map((y) => Math.min(y, horizon)))].sort((a, b) => a - b);
 }
 
 export type SummaryRow = {
@@ -45,44 +41,34 @@ export type SummaryRow = {
   npvVsNoControl: number | null;
 };
 
+/** The shared comparison numbers (also printed in the grower report), in display units. */
 export function summaryRows(compared: readonly Compared[], units: DisplayUnits): SummaryRow[] {
-  const baseline = compared.find((c) => c.projection.role === 'baseline');
-  const baselineNpv = baseline?.projection.result.summary.economics.npvPerHa.mean;
-  return compared.map(({ projection, style }) => {
-    const s = projection.result.summary;
-    const H = s.horizonYears;
-    const total = s.series.seedbankTotal;
-    const decline = s.decline.find((d) => d.fraction === 0.9);
-    const loss = s.economics.yieldLossPercent.mean.slice(1);
-    const npv = s.economics.npvPerHa;
-    return {
-      id: projection.id,
-      label: projection.label,
-      role: projection.role,
-      style,
-      seedbank: checkpointYears(H).map((year) => ({
-        year,
-        median: units.density(total.q50[year]),
-        q05: units.density(total.q05[year]),
-        q95: units.density(total.q95[year]),
-      })),
-      depletionAtHorizon: s.depletionProbability[H],
-      declineYears: decline?.medianYears ?? null,
-      declineReached: decline?.proportionReached ?? 0,
-      cumulativeCost: units.money(s.economics.cumulativeCostPerHa.q50[H]),
-      yieldLossPercent: loss.length ? loss.reduce((a, b) => a + b, 0) / loss.length : 0,
-      npv: {
-        median: units.money(npv.q50),
-        q05: units.money(npv.q05),
-        q95: units.money(npv.q95),
-        mean: units.money(npv.mean),
-      },
-      npvVsNoControl:
-        projection.role === 'baseline' || baselineNpv === undefined
-          ? null
-          : units.money(npv.mean - baselineNpv),
-    };
-  });
+  const rows = comparisonRows(
+    compared.map(({ projection: p }) => ({
+      id: p.id,
+      label: p.label,
+      role: p.role,
+      summary: p.result.summary,
+    })),
+  );
+  return rows.map((r, i) => ({
+    ...r,
+    style: compared[i].style,
+    seedbank: r.seedbank.map((b) => ({
+      year: b.year,
+      median: units.density(b.median),
+      q05: units.density(b.q05),
+      q95: units.density(b.q95),
+    })),
+    cumulativeCost: units.money(r.cumulativeCost),
+    npv: {
+      median: units.money(r.npv.median),
+      q05: units.money(r.npv.q05),
+      q95: units.money(r.npv.q95),
+      mean: units.money(r.npv.mean),
+    },
+    npvVsNoControl: r.npvVsNoControl === null ? null : units.money(r.npvVsNoControl),
+  }));
 }
 
 /** The summary table as tidy CSV: one row per projection, units in the column names. */
